@@ -1,0 +1,5 @@
+export * from './users';
+export * from './auth';
+export * from './notebooks';
+export * from './audit';
+export * from './mail';

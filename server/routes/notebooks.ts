@@ -1,0 +1,119 @@
+import { and, count, eq, sql } from 'drizzle-orm';
+import { Router } from 'express';
+import { membershipUpsertSchema, notebookCreateSchema } from '../../shared/schemas/notebooks';
+import { recordAuditEvent } from '../audit/record';
+import { notebookAccess, type NotebookAccess } from '../auth/access';
+import { currentUser, requireRole } from '../auth/middleware';
+import type { AppDeps } from '../context';
+import { memberships, notebooks, pages, users } from '../db/schema';
+import { forbidden, HttpError, notFound, parseInput } from '../http/errors';
+import { idParam } from '../http/params';
+
+export function notebookRoutes(deps: AppDeps): Router {
+  const { db } = deps;
+  const router = Router();
+
+  async function summary(notebookId: string, access: Pick<NotebookAccess, 'membership'>) {
+    const [row] = await db
+      .select({ notebook: notebooks, pageCount: count(pages.id) })
+      .from(notebooks)
+      .leftJoin(pages, eq(pages.notebookId, notebooks.id))
+      .where(eq(notebooks.id, notebookId))
+      .groupBy(notebooks.id);
+    return {
+      id: row.notebook.id,
+      title: row.notebook.title,
+      description: row.notebook.description,
+      createdAt: row.notebook.createdAt.toISOString(),
+      pageCount: Number(row.pageCount),
+      myRole: access.membership,
+    };
+  }
+
+  router.get('/notebooks', async (_req, res) => {
+    const user = currentUser(res);
+    const rows = await db
+      .select({ id: notebooks.id, membership: memberships.role })
+      .from(notebooks)
+      .leftJoin(memberships, and(eq(memberships.notebookId, notebooks.id), eq(memberships.userId, user.id)))
+      .where(user.role === 'admin' ? sql`true` : sql`${memberships.userId} is not null`)
+      .orderBy(notebooks.createdAt);
+    res.json(await Promise.all(rows.map((r) => summary(r.id, { membership: r.membership ?? null }))));
+  });
+
+  router.post('/notebooks', requireRole('admin', 'supervisor', 'chemist'), async (req, res) => {
+    const user = currentUser(res);
+    const input = parseInput(notebookCreateSchema, req.body);
+    const notebook = await db.transaction(async (tx) => {
+      const [created] = await tx.insert(notebooks).values({ ...input, createdBy: user.id }).returning();
+      await tx.insert(memberships).values({ notebookId: created.id, userId: user.id, role: 'owner' });
+      return created;
+    });
+    await recordAuditEvent(db, { type: 'notebook.created', actor: user, notebookId: notebook.id, details: { title: notebook.title } });
+    res.status(201).json(await summary(notebook.id, { membership: 'owner' }));
+  });
+
+  router.get('/notebooks/:id', async (req, res) => {
+    const access = await notebookAccess(db, currentUser(res), idParam(req, 'id', 'Notebook'));
+    res.json(await summary(access.notebookId, access));
+  });
+
+  router.get('/notebooks/:id/members', async (req, res) => {
+    const access = await notebookAccess(db, currentUser(res), idParam(req, 'id', 'Notebook'));
+    const rows = await db
+      .select({ userId: users.id, name: users.name, email: users.email, role: memberships.role })
+      .from(memberships)
+      .innerJoin(users, eq(users.id, memberships.userId))
+      .where(eq(memberships.notebookId, access.notebookId))
+      .orderBy(users.name);
+    res.json(rows);
+  });
+
+  router.put('/notebooks/:id/members', async (req, res) => {
+    const actor = currentUser(res);
+    const access = await notebookAccess(db, actor, idParam(req, 'id', 'Notebook'));
+    if (!access.canManage) throw forbidden('Only the notebook owner or an admin can change its members');
+    const input = parseInput(membershipUpsertSchema, req.body);
+    const [member] = await db.select().from(users).where(eq(users.id, input.userId));
+    if (!member) throw notFound('Person');
+    if (member.role === 'viewer' && input.role !== 'reader') {
+      throw new HttpError(422, 'viewer_read_only', 'People with the viewer role can only be readers');
+    }
+    const [previous] = await db
+      .select({ role: memberships.role })
+      .from(memberships)
+      .where(and(eq(memberships.notebookId, access.notebookId), eq(memberships.userId, member.id)));
+    await db
+      .insert(memberships)
+      .values({ notebookId: access.notebookId, userId: member.id, role: input.role })
+      .onConflictDoUpdate({ target: [memberships.notebookId, memberships.userId], set: { role: input.role } });
+    await recordAuditEvent(db, {
+      type: 'membership.changed',
+      actor,
+      notebookId: access.notebookId,
+      details: { userId: member.id, email: member.email, from: previous?.role ?? null, to: input.role },
+    });
+    res.json({ userId: member.id, name: member.name, email: member.email, role: input.role });
+  });
+
+  router.delete('/notebooks/:id/members/:userId', async (req, res) => {
+    const actor = currentUser(res);
+    const access = await notebookAccess(db, actor, idParam(req, 'id', 'Notebook'));
+    if (!access.canManage) throw forbidden('Only the notebook owner or an admin can change its members');
+    const userId = idParam(req, 'userId', 'Member');
+    const removed = await db
+      .delete(memberships)
+      .where(and(eq(memberships.notebookId, access.notebookId), eq(memberships.userId, userId)))
+      .returning();
+    if (removed.length === 0) throw notFound('Member');
+    await recordAuditEvent(db, {
+      type: 'membership.changed',
+      actor,
+      notebookId: access.notebookId,
+      details: { userId, from: removed[0].role, to: null },
+    });
+    res.status(204).end();
+  });
+
+  return router;
+}

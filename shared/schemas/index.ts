@@ -1,0 +1,6 @@
+export * from './common';
+export * from './auth';
+export * from './members';
+export * from './notebooks';
+export * from './pages';
+export * from './chem';

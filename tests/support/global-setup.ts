@@ -1,0 +1,24 @@
+import fs from 'node:fs';
+import os from 'node:os';
+import path from 'node:path';
+import { connectDatabase } from '../../server/db/client';
+import { seedDemo } from '../../server/seed/demo';
+import { startLocalStack } from '../../server/services/stack';
+
+/**
+ * Real services for the integration and browser tests, on throwaway data: a temporary PostgreSQL
+ * cluster on a free port, a temporary S3 folder and a mail catcher. The demo scenario is seeded so
+ * tests can sign in as the demo accounts. Connection details reach the test workers through env.
+ */
+export default async function setup() {
+  const dataDir = fs.mkdtempSync(path.join(os.tmpdir(), 'quillane-test-'));
+  const stack = await startLocalStack(dataDir);
+  const { db, pool } = connectDatabase(stack.env.DATABASE_URL);
+  await seedDemo(db);
+  await pool.end();
+  Object.assign(process.env, stack.env, { NODE_ENV: 'test' });
+  return async () => {
+    await stack.stop();
+    fs.rmSync(dataDir, { recursive: true, force: true });
+  };
+}
