@@ -1,0 +1,46 @@
+import { Link, useParams } from 'react-router-dom';
+import { ErrorState } from '../components/ErrorState';
+import { LoadingState } from '../components/LoadingState';
+import { PageBodySlot } from '../components/PageBodySlot';
+import { SafetyNote } from '../components/SafetyNote';
+import { usePage } from '../features/pages/api/queries';
+import { PageFacts } from '../features/pages/components/PageFacts';
+import { PageTitleEditor } from '../features/pages/components/PageTitleEditor';
+import { formatPageNumber } from '../lib/format';
+
+/**
+ * One notebook page. The page's parts come from their features and are put together here:
+ * the body editor is mounted as the child of PageBodySlot.
+ */
+export function PageRoute() {
+  const { pageId = '' } = useParams();
+  const page = usePage(pageId);
+
+  if (page.isPending) return <LoadingState label="Opening the page…" />;
+  if (page.isError) return <ErrorState error={page.error} />;
+
+  const data = page.data;
+  return (
+    <article className="flex min-h-[calc(100vh-4rem)] flex-col">
+      <nav aria-label="Where you are" className="mb-2 flex items-center gap-2 text-xs font-semibold uppercase tracking-[0.14em] text-tide-500">
+        <Link to="/notebooks" className="hover:underline">
+          Notebooks
+        </Link>
+        <span aria-hidden>/</span>
+        <Link to={`/notebooks/${data.notebookId}`} className="hover:underline">
+          {data.notebookTitle}
+        </Link>
+        <span aria-hidden>/</span>
+        <span className="font-mono normal-case tracking-normal text-ink-soft">p. {formatPageNumber(data.number)}</span>
+      </nav>
+      <PageTitleEditor page={data} />
+      <PageFacts page={data} />
+      <div className="mt-6 flex-1">
+        <PageBodySlot />
+      </div>
+      <footer className="mt-8 border-t border-fold pt-4">
+        <SafetyNote />
+      </footer>
+    </article>
+  );
+}

@@ -1,0 +1,23 @@
+import { defineConfig } from 'vite';
+import react from '@vitejs/plugin-react';
+import tailwindcss from '@tailwindcss/vite';
+
+// In development the API and the collaboration websocket live on the Express server (port 3000);
+// the production build is served by that same server from dist/client.
+const serverOrigin = 'http://127.0.0.1:3000';
+
+export default defineConfig({
+  plugins: [react(), tailwindcss()],
+  server: {
+    host: '127.0.0.1',
+    port: 5173,
+    proxy: {
+      '/api': { target: serverOrigin, changeOrigin: false },
+      '/collab': { target: serverOrigin, ws: true, changeOrigin: false },
+    },
+  },
+  build: {
+    outDir: 'dist/client',
+    emptyOutDir: true,
+  },
+});
