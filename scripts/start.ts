@@ -1,4 +1,5 @@
 import { spawn } from 'node:child_process';
+import fs from 'node:fs';
 import path from 'node:path';
 import { connectDatabase } from '../server/db/client';
 import { seedDemo } from '../server/seed/demo';
@@ -16,6 +17,8 @@ const port = process.env.PORT ?? '3000';
 async function main() {
   console.log('[quillane] starting PostgreSQL, the S3 fake and the mail catcher ...');
   const stack = await startLocalStack(path.join(root, '.data'));
+  // For development: lets a second server (e.g. `tsx watch`) reach the same services.
+  fs.writeFileSync(path.join(root, '.data', 'services.env'), Object.entries(stack.env).map(([k, v]) => `${k}=${v}`).join('\n') + '\n');
   let stopping = false;
   const stopAll = async (code: number) => {
     if (stopping) return;
