@@ -22,7 +22,13 @@ export function AppLayout() {
   const location = useLocation();
   const navigate = useNavigate();
 
-  if (me.isPending) return <LoadingState label="Opening Quillane…" />;
+  if (me.isPending) {
+    return (
+      <div className="flex min-h-screen items-center justify-center">
+        <LoadingState label="Opening Quillane…" />
+      </div>
+    );
+  }
   if (me.isError) return <div className="p-10"><ErrorState error={me.error} /></div>;
   if (!me.data) {
     const next = `${location.pathname}${location.search}`;
