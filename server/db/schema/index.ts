@@ -3,3 +3,4 @@ export * from './auth';
 export * from './notebooks';
 export * from './audit';
 export * from './mail';
+export * from './signing';
