@@ -1,0 +1,75 @@
+import { randomUUID } from 'node:crypto';
+import type { AppDeps } from '../../server/context';
+import { hashPassword } from '../../server/auth/passwords';
+import { users } from '../../server/db/schema';
+import type { Role } from '../../shared/schemas/common';
+import { ApiClient, signedIn } from './api';
+
+/**
+ * Test data of one's own: the suite shares one database, so every test makes the people,
+ * notebooks and pages it relies on instead of counting on global state.
+ */
+export function uniqueEmail(prefix: string): string {
+  return `${prefix}-${randomUUID().slice(0, 8)}@saltmarsh.test`;
+}
+
+export interface TestPerson {
+  id: string;
+  email: string;
+  password: string;
+  role: Role;
+}
+
+/** A person with a known password, written straight into the database (no mail round trip). */
+export async function createPerson(deps: AppDeps, role: Role, prefix: string = role): Promise<TestPerson> {
+  const email = uniqueEmail(prefix);
+  const password = `pw-${randomUUID()}`;
+  const [row] = await deps.db
+    .insert(users)
+    .values({ email, name: `Test ${prefix}`, role, passwordHash: await hashPassword(password) })
+    .returning();
+  return { id: row.id, email, password, role };
+}
+
+export async function signedInAs(url: string, person: TestPerson): Promise<ApiClient> {
+  return signedIn(url, person.email, person.password);
+}
+
+/** The newest caught message to `address`, read through the admins' mail view. */
+export async function latestMailTo(admin: ApiClient, address: string): Promise<{ subject: string; text: string } | undefined> {
+  const response = await admin.get<{ to: string[]; subject: string; text: string }[]>('/api/mail');
+  if (response.status !== 200) throw new Error(`GET /api/mail answered ${response.status}`);
+  return response.body.find((m) => m.to.includes(address));
+}
+
+/** The token at the end of an e-mailed link such as `<origin>/invite/<token>`. */
+export function tokenFromLink(text: string, kind: 'invite' | 'reset'): string {
+  const match = new RegExp(`/${kind}/([A-Za-z0-9_-]+)`).exec(text);
+  if (!match) throw new Error(`no /${kind}/ link in mail: ${text}`);
+  return match[1];
+}
+
+export interface CookieAttributes {
+  name: string;
+  value: string;
+  attributes: Map<string, string>;
+}
+
+/** Splits one Set-Cookie header into name, value and lower-cased attribute names. */
+export function parseSetCookie(header: string): CookieAttributes {
+  const [pair, ...rest] = header.split(';').map((p) => p.trim());
+  const eq = pair.indexOf('=');
+  const attributes = new Map<string, string>();
+  for (const part of rest) {
+    const i = part.indexOf('=');
+    attributes.set((i < 0 ? part : part.slice(0, i)).toLowerCase(), i < 0 ? '' : part.slice(i + 1));
+  }
+  return { name: pair.slice(0, eq), value: pair.slice(eq + 1), attributes };
+}
+
+export function sessionCookieOf(headers: Headers): CookieAttributes | undefined {
+  return headers
+    .getSetCookie()
+    .map(parseSetCookie)
+    .find((c) => c.name === 'quillane_session');
+}
