@@ -82,7 +82,7 @@ describe('client shell', () => {
     expect(number).toBe(Math.max(...numbersBefore) + 1);
   });
 
-  it('lets an admin invite someone and read the invitation in the mail room', async () => {
+  it('lets an admin invite someone, read the invitation in the mail room, and the invitee join through its link', async () => {
     const page = await freshPage();
     await signIn(page, server.url, 'admin@saltmarsh.test', PASSWORD);
     await page.getByRole('navigation', { name: 'Main' }).getByRole('link', { name: 'People and roles' }).click();
@@ -107,6 +107,11 @@ describe('client shell', () => {
     const inviteePage = await invitee.newPage();
     await inviteePage.goto(link!.replace(/^https?:\/\/[^/]+/, server.url));
     await expect(inviteePage.getByText(`You were invited as ${email}`).textContent()).resolves.toContain('Bench chemist');
+    await inviteePage.getByLabel('New password').fill('reed-and-tide-2026');
+    await inviteePage.getByLabel('Repeat the password').fill('reed-and-tide-2026');
+    await inviteePage.getByRole('button', { name: 'Set password and sign in' }).click();
+    await expect(inviteePage.getByTestId('signed-in-name').textContent()).resolves.toBe('Rowan Newcomer');
+    expect(new URL(inviteePage.url()).pathname).toBe('/notebooks');
     await invitee.close();
   });
 
