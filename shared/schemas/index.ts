@@ -4,3 +4,4 @@ export * from './members';
 export * from './notebooks';
 export * from './pages';
 export * from './chem';
+export * from './attachments';

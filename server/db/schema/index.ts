@@ -4,3 +4,4 @@ export * from './notebooks';
 export * from './audit';
 export * from './mail';
 export * from './signing';
+export * from './attachments';
