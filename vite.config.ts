@@ -11,6 +11,7 @@ export default defineConfig({
   server: {
     host: '127.0.0.1',
     port: 5173,
+    // Host and Origin stay the dev server's, so the server's same-host Origin check (CSRF) passes.
     proxy: {
       '/api': { target: serverOrigin, changeOrigin: false },
       '/collab': { target: serverOrigin, ws: true, changeOrigin: false },
