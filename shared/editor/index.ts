@@ -1,0 +1,3 @@
+export * from './structureNode';
+export * from './attachmentEmbedNode';
+export * from './pageNodes';
