@@ -35,6 +35,12 @@ export function peopleRoutes(deps: AppDeps): Router {
   const router = Router();
   router.use(['/users', '/invitations', '/mail'], requireRole('admin'));
 
+  // The group directory (names and roles, no admin data) lets notebook owners add members.
+  router.get('/people', requireRole('admin', 'supervisor', 'chemist'), async (_req, res) => {
+    const rows = await db.select({ id: users.id, name: users.name, email: users.email, role: users.role }).from(users).orderBy(users.name);
+    res.json(rows);
+  });
+
   router.get('/users', async (_req, res) => {
     const rows = await db.select().from(users).orderBy(users.name);
     res.json(rows.map(userSummary));
