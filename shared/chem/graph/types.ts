@@ -51,4 +51,9 @@ export interface MolGraph {
   bonds: Bond[];
   /** adjacency[i] lists { atom, bond } for every neighbour of atom i. */
   adjacency: { atom: number; bond: number }[][];
+  /**
+   * Stereo features the input carries that the fields above cannot hold (axial chirality, stereo
+   * at unusual centres), in words. Anything listed here keeps a molecule from being named.
+   */
+  stereoNotes?: string[];
 }

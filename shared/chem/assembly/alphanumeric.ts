@@ -1,0 +1,36 @@
+/**
+ * Alphanumerical ordering of IUPAC 2013 P-14.5: letters first (italic prefixes such as sec-,
+ * tert- and italic locants such as N- ignored; multiplying prefixes are not part of a simple
+ * prefix's name and therefore never seen here; 'iso' counts), then, at equal letters, the
+ * italic prefix (none < sec < tert, P-14.5.2) and lower locants at the first point of
+ * difference (P-14.5.4).
+ */
+export function alphaLetters(name: string): string {
+  return name.replace(/\b(sec|tert)-/g, '').replace(/[^a-z]/g, '');
+}
+
+function italicRank(name: string): number {
+  if (/^tert-/.test(name)) return 2;
+  if (/^sec-/.test(name)) return 1;
+  return 0;
+}
+
+function numbers(name: string): number[] {
+  return (name.match(/\d+/g) ?? []).map(Number);
+}
+
+export function compareNumberLists(a: readonly number[], b: readonly number[]): number {
+  for (let i = 0; i < Math.min(a.length, b.length); i++) if (a[i] !== b[i]) return a[i] - b[i];
+  return a.length - b.length;
+}
+
+export function compareAlphanumerical(a: string, b: string): number {
+  const la = alphaLetters(a);
+  const lb = alphaLetters(b);
+  if (la !== lb) return la < lb ? -1 : 1;
+  const italic = italicRank(a) - italicRank(b);
+  if (italic !== 0) return italic;
+  const byNumbers = compareNumberLists(numbers(a), numbers(b));
+  if (byNumbers !== 0) return byNumbers;
+  return a < b ? -1 : a > b ? 1 : 0;
+}

@@ -1,0 +1,47 @@
+import type { NamingContext } from '../numbering/context';
+import type { Evaluated } from '../numbering/evaluate';
+import { hydrideName, type FreeValenceKind } from './hydride';
+import { citePrefixes, joinPrefixes } from './prefixes';
+import { NamingRefusal } from './refusal';
+
+const FREE_VALENCE: Record<1 | 2 | 3, FreeValenceKind> = { 1: 'yl', 2: 'ylidene', 3: 'ylidyne' };
+
+/**
+ * Whether P-31.1.4.2.4 lets the prefix locants go: mononuclear parents (chloromethane), a single
+ * prefix on a two-atom chain (chloroethane), a single prefix on a ring whose atoms are all
+ * alike (chlorocyclohexane, chlorobenzene).
+ */
+function omitPrefixLocants(e: Evaluated): boolean {
+  const size = e.skeleton.atoms.length;
+  if (size === 1) return true;
+  if (e.attachment) return false;
+  if (e.prefixes.length !== 1) return false;
+  if (e.skeleton.kind === 'chain') return size === 2;
+  return e.multiple.length === 0;
+}
+
+/** Name of a parent (no attachment) or a substituent group (with attachment), from its evaluation. */
+export function renderUnit(ctx: NamingContext, e: Evaluated): string {
+  void ctx;
+  return joinPrefixes(citePrefixes(e.prefixes, omitPrefixLocants(e))) + parentPart(e);
+}
+
+/** The parent hydride's own name with unsaturation and free-valence endings, without prefixes. */
+export function parentPart(e: Evaluated): string {
+  if (e.closesRing) throw new NamingRefusal('a ring numbering that puts a multiple bond between the last and first ring atoms is not handled yet');
+  const size = e.skeleton.atoms.length;
+  const fv = e.attachment ? { locant: e.freeValence[0], kind: FREE_VALENCE[e.attachment.order] } : null;
+  let parent: string;
+  if (e.skeleton.kind === 'benzene') {
+    if (fv && fv.kind !== 'yl') throw new NamingRefusal('a benzene ring attached by a multiple bond cannot be named');
+    parent = fv ? 'phenyl' : 'benzene';
+  } else {
+    const citeMultiple = !(e.skeleton.kind === 'chain' && size === 2) && !(e.skeleton.kind === 'ring' && !fv && e.multiple.length === 1 && e.prefixes.length === 0);
+    parent = hydrideName({ size, ring: e.skeleton.kind === 'ring', multiple: e.multiple, freeValence: fv, citeMultipleBondLocants: citeMultiple });
+  }
+  return parent;
+}
+
+export function prefixLocantsOmitted(e: Evaluated): boolean {
+  return omitPrefixLocants(e);
+}

@@ -1,0 +1,58 @@
+import type { MolGraph } from '../graph/types';
+import { ChemInputError } from '../parsing/errors';
+import { ATOMIC_WEIGHT, MOST_ABUNDANT, NUCLIDE_MASS } from './elements';
+
+/** Element counts, hydrogens included (isotope labels counted under their element). */
+export function elementCounts(graph: MolGraph): Map<string, number> {
+  const counts = new Map<string, number>();
+  const add = (element: string, n: number) => counts.set(element, (counts.get(element) ?? 0) + n);
+  for (const atom of graph.atoms) {
+    add(atom.element, 1);
+    if (atom.hydrogens > 0) add('H', atom.hydrogens);
+  }
+  return counts;
+}
+
+/**
+ * Hill formula (Hill, J. Am. Chem. Soc. 22 (1900) 478): carbon first, then hydrogen, then the
+ * other elements alphabetically; without carbon, all elements alphabetically. Counts of 1 are
+ * not written. A net charge is appended as "+", "2-" etc.
+ */
+export function hillFormula(graph: MolGraph): string {
+  const counts = elementCounts(graph);
+  const part = (element: string) => element + (counts.get(element)! > 1 ? counts.get(element) : '');
+  const others = [...counts.keys()].filter((e) => !(counts.has('C') && (e === 'C' || e === 'H'))).sort();
+  const head = counts.has('C') ? ['C', ...(counts.has('H') ? ['H'] : [])] : [];
+  const charge = graph.atoms.reduce((sum, atom) => sum + atom.charge, 0);
+  const chargeText = charge === 0 ? '' : `${Math.abs(charge) > 1 ? Math.abs(charge) : ''}${charge > 0 ? '+' : '-'}`;
+  return [...head, ...others].map(part).join('') + chargeText;
+}
+
+function nuclideMass(element: string, massNumber: number): number {
+  const mass = NUCLIDE_MASS[element]?.[massNumber];
+  if (mass === undefined) throw new ChemInputError('unsupported_feature', `isotope ${massNumber}${element} is not in the engine's nuclide table`);
+  return mass;
+}
+
+/**
+ * Average molar mass (g/mol) from the CIAAW standard atomic weights; an isotope-labelled atom
+ * contributes its nuclide mass instead (the label fixes the isotope). Electron mass is ignored.
+ */
+export function averageMass(graph: MolGraph): number {
+  let sum = 0;
+  for (const atom of graph.atoms) {
+    sum += atom.isotope === null ? ATOMIC_WEIGHT[atom.element] : nuclideMass(atom.element, atom.isotope);
+    sum += atom.hydrogens * ATOMIC_WEIGHT.H;
+  }
+  return sum;
+}
+
+/** Monoisotopic mass (Da): the most abundant isotope of every unlabelled atom. */
+export function monoisotopicMass(graph: MolGraph): number {
+  let sum = 0;
+  for (const atom of graph.atoms) {
+    sum += nuclideMass(atom.element, atom.isotope ?? MOST_ABUNDANT[atom.element]);
+    sum += atom.hydrogens * nuclideMass('H', 1);
+  }
+  return sum;
+}

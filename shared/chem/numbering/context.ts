@@ -1,0 +1,46 @@
+import type { MolGraph } from '../graph/types';
+import type { RingSystems } from '../graph/rings';
+import type { PrefixGroup } from '../groups/scope';
+import type { NameStyle } from '../assembly/style';
+
+/** A named substituent prefix (P-29, P-61), independent of the parent's numbering. */
+export interface SubstituentName {
+  /** As cited, without multiplying prefix or enclosing marks: 'methyl', '2-methylpropyl', 'tert-butyl'. */
+  name: string;
+  /** Substituted (compound or complex) prefix: multiplied with bis/tris, always enclosed. */
+  compound: boolean;
+  /** Needs enclosing marks when cited (compound prefixes and prefixes containing locants). */
+  enclose: boolean;
+  atoms: number[];
+}
+
+export interface NamingContext {
+  graph: MolGraph;
+  style: NameStyle;
+  rings: RingSystems;
+  groups: Map<number, PrefixGroup>;
+  /** Memo of substituent names, keyed by attachment atom and the parent atom it hangs from. */
+  substituents: Map<string, SubstituentName>;
+}
+
+/** A candidate parent hydride (or substituent parent) in locant order: atoms[0] has locant 1. */
+export interface Skeleton {
+  kind: 'chain' | 'ring' | 'benzene';
+  atoms: number[];
+}
+
+/** The free valence of a substituent: `atom` bonds to `from` (outside) with bond `order`. */
+export interface Attachment {
+  atom: number;
+  from: number;
+  order: 1 | 2 | 3;
+}
+
+export interface Prefix {
+  locant: number;
+  substituent: SubstituentName;
+}
+
+export function isChainCarbon(ctx: NamingContext, atom: number): boolean {
+  return ctx.graph.atoms[atom].element === 'C' && ctx.rings.systemOf[atom] < 0;
+}

@@ -1,0 +1,65 @@
+import { compareAlphanumerical, compareNumberLists } from '../assembly/alphanumeric';
+import type { Evaluated } from './evaluate';
+
+type Comparator = (a: Evaluated, b: Evaluated) => number;
+
+const ascending = (values: number[]) => [...values].sort((x, y) => x - y);
+const more = (count: (e: Evaluated) => number): Comparator => (a, b) => count(b) - count(a);
+const lower = (locants: (e: Evaluated) => number[]): Comparator => (a, b) => compareNumberLists(ascending(locants(a)), ascending(locants(b)));
+
+/**
+ * Locants of the prefixes in order of citation (alphanumerical order of their names), for
+ * P-31.1.4.3.4 / P-45.2.3: lowest locants to the prefix cited first.
+ */
+function locantsInCitationOrder(e: Evaluated): number[] {
+  return [...e.prefixes]
+    .sort((x, y) => compareAlphanumerical(x.substituent.name, y.substituent.name) || x.locant - y.locant)
+    .map((p) => p.locant);
+}
+
+/**
+ * The criteria deciding between candidate parents and their numberings, in the order of the
+ * 2013 rules. Chain choice and numbering interleave exactly as below, so both are decided by one
+ * pass over (chain, direction) candidates:
+ *  P-44.3 (b) greater number of skeletal atoms;
+ *  P-44.4.1.1 greater number of multiple bonds; P-44.4.1.2 greater number of double bonds;
+ *  P-31.1.4.2.4 lowest locants for free valences (principal characteristic groups come here in part 2);
+ *  P-31.1.4.2.4 / P-44.4.1.4 lowest locants for multiple bonds together, then for double bonds;
+ *  P-45.2.1 greater number of prefixes; P-45.2.2 / P-31.1.4.3 lowest locants for all prefixes;
+ *  P-45.2.3 / P-31.1.4.3.4 lowest locants for the prefix cited first in alphanumerical order.
+ * The last resort, P-45.5 (the name first in alphanumerical order), needs the rendered names and
+ * is applied by the caller.
+ */
+const CRITERIA: Comparator[] = [
+  more((e) => e.skeleton.atoms.length),
+  more((e) => e.multiple.length),
+  more((e) => e.multiple.filter((m) => m.order === 2).length),
+  lower((e) => e.freeValence),
+  lower((e) => e.multiple.map((m) => m.locant)),
+  lower((e) => e.multiple.filter((m) => m.order === 2).map((m) => m.locant)),
+  more((e) => e.prefixes.length),
+  lower((e) => e.prefixes.map((p) => p.locant)),
+  (a, b) => compareNumberLists(locantsInCitationOrder(a), locantsInCitationOrder(b)),
+];
+
+export function bestCandidates(candidates: Evaluated[], extra: Comparator[] = []): Evaluated[] {
+  let survivors = candidates;
+  for (const criterion of [...extra, ...CRITERIA]) {
+    if (survivors.length <= 1) break;
+    let best = survivors[0];
+    for (const c of survivors) if (criterion(c, best) < 0) best = c;
+    survivors = survivors.filter((c) => criterion(c, best) === 0);
+  }
+  return survivors;
+}
+
+/** P-45.5: among candidates the rules cannot separate, the name first in alphanumerical order. */
+export function firstByName<T>(items: T[], render: (item: T) => string): { item: T; name: string } {
+  let best = items[0];
+  let bestName = render(best);
+  for (const item of items.slice(1)) {
+    const name = render(item);
+    if (compareAlphanumerical(name, bestName) < 0) (best = item), (bestName = name);
+  }
+  return { item: best, name: bestName };
+}

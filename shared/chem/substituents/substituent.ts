@@ -1,0 +1,53 @@
+import { longestSubstituentChains } from '../chain/paths';
+import { NamingRefusal } from '../assembly/refusal';
+import { renderUnit } from '../assembly/unit';
+import type { Attachment, NamingContext, Skeleton, SubstituentName } from '../numbering/context';
+import { evaluate } from '../numbering/evaluate';
+import { bestCandidates, firstByName } from '../numbering/select';
+import { ringNumberings } from '../rings/numberings';
+import { bondBetween } from '../graph/rings';
+import { retainedPrefix } from './retained';
+
+/**
+ * Names the substituent group that starts at `atom` and hangs from the parent atom `from`:
+ * halogen or nitro prefixes, or a carbon group named on its own parent (a chain or ring that
+ * contains the attachment atom) with its own numbering and prefixes, recursively (P-29, P-44
+ * applied to the group).
+ */
+export function nameSubstituent(ctx: NamingContext, atom: number, from: number): SubstituentName {
+  const key = `${atom}<${from}`;
+  const known = ctx.substituents.get(key);
+  if (known) return known;
+  const result = build(ctx, atom, from);
+  ctx.substituents.set(key, result);
+  return result;
+}
+
+function build(ctx: NamingContext, atom: number, from: number): SubstituentName {
+  const { graph } = ctx;
+  const group = ctx.groups.get(atom);
+  if (group) return { name: group.kind, compound: false, enclose: false, atoms: group.atoms };
+  if (graph.atoms[atom].element !== 'C') throw new NamingRefusal(`atom ${atom + 1} (${graph.atoms[atom].element}) cannot be named as a substituent yet`);
+  const order = graph.bonds[bondBetween(graph, atom, from)].order;
+  const attachment: Attachment = { atom, from, order };
+  const system = ctx.rings.systemOf[atom];
+  const skeletons: Skeleton[] =
+    system >= 0
+      ? ringNumberings(graph, ctx.rings.systems[system].atoms, atom)
+      : longestSubstituentChains(ctx, atom, from, ctx.style === 'traditional').map((atoms) => ({ kind: 'chain' as const, atoms }));
+  const best = bestCandidates(skeletons.map((s) => evaluate(ctx, s, attachment)));
+  const { item, name } = firstByName(best, (e) => renderUnit(ctx, e));
+  const retained = retainedPrefix(name, ctx.style);
+  const atoms = collectAtoms(ctx, atom, from);
+  if (retained) return { name: retained, compound: false, enclose: false, atoms };
+  return { name, compound: item.prefixes.length > 0, enclose: item.prefixes.length > 0 || /\d/.test(name), atoms };
+}
+
+function collectAtoms(ctx: NamingContext, atom: number, from: number): number[] {
+  const seen = new Set<number>([from, atom]);
+  const queue = [atom];
+  for (let i = 0; i < queue.length; i++) {
+    for (const { atom: next } of ctx.graph.adjacency[queue[i]]) if (!seen.has(next)) (seen.add(next), queue.push(next));
+  }
+  return queue.sort((a, b) => a - b);
+}
