@@ -1,11 +1,11 @@
-import { desc, eq } from 'drizzle-orm';
+import { and, desc, eq, ne } from 'drizzle-orm';
 import { Router } from 'express';
 import { invitationCreateSchema, userRoleUpdateSchema } from '../../shared/schemas/members';
 import { recordAuditEvent } from '../audit/record';
 import { currentUser, requireRole } from '../auth/middleware';
 import { newToken } from '../auth/tokens';
 import type { AppDeps } from '../context';
-import { caughtMail, invitations, users } from '../db/schema';
+import { caughtMail, invitations, memberships, users } from '../db/schema';
 import { HttpError, notFound, parseInput } from '../http/errors';
 import { idParam } from '../http/params';
 
@@ -55,11 +55,23 @@ export function peopleRoutes(deps: AppDeps): Router {
     }
     const [before] = await db.select().from(users).where(eq(users.id, id));
     if (!before) throw notFound('Person');
-    const [after] = await db.update(users).set({ role }).where(eq(users.id, id)).returning();
+    const { after, readerIn } = await db.transaction(async (tx) => {
+      const [updated] = await tx.update(users).set({ role }).where(eq(users.id, id)).returning();
+      // Viewers can only be readers, so a demotion to viewer takes every membership down with it.
+      const downgraded =
+        role === 'viewer'
+          ? await tx
+              .update(memberships)
+              .set({ role: 'reader' })
+              .where(and(eq(memberships.userId, id), ne(memberships.role, 'reader')))
+              .returning({ notebookId: memberships.notebookId })
+          : [];
+      return { after: updated, readerIn: downgraded.map((m) => m.notebookId) };
+    });
     await recordAuditEvent(db, {
       type: 'user.role_changed',
       actor: admin,
-      details: { userId: id, email: after.email, from: before.role, to: role },
+      details: { userId: id, email: after.email, from: before.role, to: role, ...(readerIn.length ? { readerIn } : {}) },
     });
     res.json(userSummary(after));
   });
