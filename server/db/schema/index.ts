@@ -4,4 +4,5 @@ export * from './notebooks';
 export * from './audit';
 export * from './mail';
 export * from './signing';
+export * from './collab';
 export * from './attachments';
