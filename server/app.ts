@@ -11,6 +11,8 @@ import { healthRoutes } from './routes/health';
 import { notebookRoutes } from './routes/notebooks';
 import { pageRoutes } from './routes/pages';
 import { peopleRoutes } from './routes/people';
+import { signingRoutes } from './routes/signing';
+import { auditRoutes } from './routes/audit';
 
 /** The HTTP application without a listening socket, so tests can run it on any port. */
 export function createApp(deps: AppDeps): express.Express {
@@ -41,6 +43,8 @@ export function createApp(deps: AppDeps): express.Express {
   api.use(peopleRoutes(deps));
   api.use(notebookRoutes(deps));
   api.use(pageRoutes(deps));
+  api.use(signingRoutes(deps));
+  api.use(auditRoutes(deps));
   api.use(() => {
     throw new HttpError(404, 'not_found', 'No such API route');
   });

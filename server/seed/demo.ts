@@ -4,6 +4,7 @@ import { hashPassword } from '../auth/passwords';
 import type { Database } from '../db/client';
 import { memberships, notebooks, pages, users } from '../db/schema';
 import { DEMO_PASSWORD, demoPeople } from './demoPeople';
+import { seedDemoSigning } from './demoSigning';
 
 export type DemoUsers = Record<string, { id: string; name: string }>;
 
@@ -56,5 +57,6 @@ export async function seedDemo(db: Database): Promise<{ created: boolean; users:
       await recordAuditEvent(db, { type: 'page.created', actor: author, notebookId: notebook.id, pageId: page.id, details: { number: i + 1, title } });
     }
   }
+  await seedDemoSigning(db, byEmail);
   return { created: true, users: byEmail };
 }
