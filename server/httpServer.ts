@@ -1,5 +1,6 @@
 import http from 'node:http';
 import { createApp } from './app';
+import { attachCollab } from './collab';
 import type { AppDeps } from './context';
 
 /**
@@ -9,6 +10,7 @@ import type { AppDeps } from './context';
 export function createHttpServer(deps: AppDeps): { server: http.Server; close(): Promise<void> } {
   const server = http.createServer(createApp(deps));
   const closers: (() => Promise<void>)[] = [];
+  closers.push(attachCollab(server, deps).close);
   return {
     server,
     async close() {

@@ -1,0 +1,57 @@
+import type http from 'node:http';
+import type { Duplex } from 'node:stream';
+import type { User } from 'lucia';
+import { pageAccess, type PageAccess } from '../auth/access';
+import type { AppDeps } from '../context';
+import { HttpError } from '../http/errors';
+
+const COLLAB_PATH = /^\/collab\/([^/?#]+)\/?(?:[?#].*)?$/;
+const UUID = /^[0-9a-f]{8}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{12}$/i;
+
+export interface UpgradeGrant {
+  pageId: string;
+  user: User;
+  access: PageAccess;
+}
+
+/** The page id of a collaboration URL, or null when the upgrade is meant for someone else. */
+export function collabPageId(url: string | undefined): string | null {
+  const match = COLLAB_PATH.exec(url ?? '');
+  return match ? decodeURIComponent(match[1]) : null;
+}
+
+/**
+ * Decides an upgrade before the websocket handshake: our own origin (a browser on another site
+ * must not ride the cookie), a valid session (else 401) and membership of the page's notebook
+ * (else 404, as the API does). Throws HttpError for the refusal to send.
+ */
+export async function authorizeUpgrade(deps: AppDeps, req: http.IncomingMessage, pageId: string): Promise<UpgradeGrant> {
+  if (!UUID.test(pageId)) throw new HttpError(404, 'not_found', 'Page was not found');
+  const origin = req.headers.origin;
+  if (origin && !allowedOrigin(deps, req, origin)) {
+    throw new HttpError(403, 'bad_origin', 'This connection did not come from the Quillane app (Origin check failed)');
+  }
+  const sessionId = deps.auth.readSessionCookie(req.headers.cookie ?? '');
+  const { user } = sessionId ? await deps.auth.validateSession(sessionId) : { user: null };
+  if (!user) throw new HttpError(401, 'not_signed_in', 'Please sign in first');
+  const access = await pageAccess(deps.db, user, pageId.toLowerCase());
+  return { pageId: access.page.id, user, access };
+}
+
+function allowedOrigin(deps: AppDeps, req: http.IncomingMessage, origin: string): boolean {
+  if (origin === new URL(deps.config.publicUrl).origin) return true;
+  return Boolean(req.headers.host) && (origin === `http://${req.headers.host}` || origin === `https://${req.headers.host}`);
+}
+
+/** Answers a refused upgrade with a plain HTTP response in the API's error shape, then hangs up. */
+export function refuseUpgrade(socket: Duplex, error: HttpError): void {
+  const body = JSON.stringify({ error: { code: error.code, message: error.message } });
+  const reason = { 401: 'Unauthorized', 403: 'Forbidden', 404: 'Not Found', 503: 'Service Unavailable' }[error.status] ?? 'Error';
+  socket.end(
+    `HTTP/1.1 ${error.status} ${reason}\r\n` +
+      'Connection: close\r\n' +
+      'Content-Type: application/json; charset=utf-8\r\n' +
+      `Content-Length: ${Buffer.byteLength(body)}\r\n\r\n` +
+      body,
+  );
+}
