@@ -19,6 +19,14 @@ export interface UserSummary {
   createdAt: string;
 }
 
+/** One entry of the group directory (`GET /api/people`), from which notebook owners add members. */
+export interface DirectoryPerson {
+  id: string;
+  name: string;
+  email: string;
+  role: z.infer<typeof roleSchema>;
+}
+
 export interface InvitationSummary {
   id: string;
   email: string;

@@ -3,7 +3,7 @@ import { ErrorState } from '../components/ErrorState';
 import { LoadingState } from '../components/LoadingState';
 import { PageHeader } from '../components/PageHeader';
 import { Panel } from '../components/Panel';
-import { useNotebookMembers, useUsers } from '../features/members/api/queries';
+import { useDirectory, useNotebookMembers } from '../features/members/api/queries';
 import { AddMemberForm } from '../features/members/components/AddMemberForm';
 import { NotebookMembersTable } from '../features/members/components/NotebookMembersTable';
 import { useNotebook } from '../features/notebooks/api/queries';
@@ -14,17 +14,15 @@ export function NotebookMembersRoute() {
   const me = useSignedInPerson();
   const notebook = useNotebook(notebookId);
   const members = useNotebookMembers(notebookId);
-  const isAdmin = me.role === 'admin';
-  // The organisation's list of people is open to admins only, so only they can add new members.
-  const users = useUsers(isAdmin);
+  const canManage = me.role === 'admin' || notebook.data?.myRole === 'owner';
+  const directory = useDirectory(canManage);
 
   if (notebook.isPending || members.isPending) return <LoadingState label="Loading members…" />;
   if (notebook.isError) return <ErrorState error={notebook.error} />;
   if (members.isError) return <ErrorState error={members.error} />;
 
-  const canManage = isAdmin || notebook.data.myRole === 'owner';
   const memberIds = new Set(members.data.map((member) => member.userId));
-  const candidates = (users.data ?? []).filter((user) => !memberIds.has(user.id));
+  const candidates = (directory.data ?? []).filter((person) => !memberIds.has(person.id));
 
   return (
     <>
@@ -41,10 +39,12 @@ export function NotebookMembersRoute() {
         <NotebookMembersTable notebookId={notebookId} members={members.data} canManage={canManage} />
         {canManage && (
           <Panel title="Add a member">
-            {isAdmin ? (
-              users.isError ? <ErrorState error={users.error} /> : users.isPending ? <LoadingState /> : <AddMemberForm notebookId={notebookId} candidates={candidates} />
+            {directory.isError ? (
+              <ErrorState error={directory.error} />
+            ) : directory.isPending ? (
+              <LoadingState />
             ) : (
-              <p className="text-sm text-ink-soft">Adding people who are not yet members is done by an admin of your group.</p>
+              <AddMemberForm notebookId={notebookId} candidates={candidates} />
             )}
           </Panel>
         )}

@@ -1,22 +1,29 @@
 import { useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
-import type { InvitationCreateInput, InvitationSummary, MembershipRole, NotebookMember, Role, UserSummary } from '../../../../shared/schemas';
+import type { DirectoryPerson, InvitationCreateInput, InvitationSummary, MembershipRole, NotebookMember, Role, UserSummary } from '../../../../shared/schemas';
 import { api } from '../../../lib/api';
 
 export const memberKeys = {
   users: ['users'] as const,
+  directory: ['people'] as const,
   invitations: ['invitations'] as const,
   ofNotebook: (notebookId: string) => ['notebooks', notebookId, 'members'] as const,
 };
 
-export function useUsers(enabled = true) {
-  return useQuery({ queryKey: memberKeys.users, queryFn: () => api.get<UserSummary[]>('/api/users'), enabled });
+export function useUsers() {
+  return useQuery({ queryKey: memberKeys.users, queryFn: () => api.get<UserSummary[]>('/api/users') });
+}
+
+/** The group directory; only fetched where someone may add members (viewers are refused it). */
+export function useDirectory(enabled: boolean) {
+  return useQuery({ queryKey: memberKeys.directory, queryFn: () => api.get<DirectoryPerson[]>('/api/people'), enabled });
 }
 
 export function useUpdateUserRole() {
   const client = useQueryClient();
   return useMutation({
     mutationFn: ({ id, role }: { id: string; role: Role }) => api.patch<UserSummary>(`/api/users/${encodeURIComponent(id)}`, { role }),
-    onSettled: () => client.invalidateQueries({ queryKey: memberKeys.users }),
+    // The directory shows org roles too, and decides which notebook parts are offered.
+    onSettled: () => Promise.all([client.invalidateQueries({ queryKey: memberKeys.users }), client.invalidateQueries({ queryKey: memberKeys.directory })]),
   });
 }
 
