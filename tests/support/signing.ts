@@ -1,0 +1,97 @@
+import { $createParagraphNode, $createTextNode, $getRoot } from 'lexical';
+import type { ApiClient } from './api';
+import { signedIn } from './api';
+import { connectCollab, lexicalEditorOn, serverCaughtUp } from './collab';
+import { createPerson, latestMailTo, signedInAs, type TestPerson } from './fixtures';
+import type { TestServer } from './server';
+
+export interface Member {
+  person: TestPerson;
+  api: ApiClient;
+}
+
+/**
+ * A notebook of one's own with everyone the signing rules distinguish: the author (owner), a
+ * co-editor, two supervisors (editors), a reader with the viewer role, and an outside supervisor
+ * who is not a member.
+ */
+export interface SigningGroup {
+  notebookId: string;
+  author: Member;
+  coEditor: Member;
+  supervisor: Member;
+  supervisor2: Member;
+  reader: Member;
+  outsider: Member;
+  admin: ApiClient;
+}
+
+async function member(server: TestServer, role: TestPerson['role'], prefix: string): Promise<Member> {
+  const person = await createPerson(server.deps, role, prefix);
+  return { person, api: await signedInAs(server.url, person) };
+}
+
+export async function signingGroup(server: TestServer): Promise<SigningGroup> {
+  const author = await member(server, 'chemist', 'author');
+  const coEditor = await member(server, 'chemist', 'coeditor');
+  const supervisor = await member(server, 'supervisor', 'supervisor');
+  const supervisor2 = await member(server, 'supervisor', 'supervisor2');
+  const reader = await member(server, 'viewer', 'reader');
+  const outsider = await member(server, 'supervisor', 'outsider');
+  const notebook = await author.api.post('/api/notebooks', { title: 'Signing tests', description: '' });
+  if (notebook.status !== 201) throw new Error(`notebook: ${notebook.status} ${JSON.stringify(notebook.body)}`);
+  const notebookId = notebook.body.id as string;
+  for (const [m, role] of [
+    [coEditor, 'editor'],
+    [supervisor, 'editor'],
+    [supervisor2, 'editor'],
+    [reader, 'reader'],
+  ] as const) {
+    const added = await author.api.put(`/api/notebooks/${notebookId}/members`, { userId: m.person.id, role });
+    if (added.status >= 300) throw new Error(`member: ${added.status} ${JSON.stringify(added.body)}`);
+  }
+  return { notebookId, author, coEditor, supervisor, supervisor2, reader, outsider, admin: await signedIn(server.url, 'admin@saltmarsh.test') };
+}
+
+export async function newPage(api: ApiClient, notebookId: string, title: string): Promise<string> {
+  const response = await api.post(`/api/notebooks/${notebookId}/pages`, { title });
+  if (response.status !== 201) throw new Error(`page: ${response.status} ${JSON.stringify(response.body)}`);
+  return response.body.id;
+}
+
+/** Writes paragraphs through the real collaboration websocket, as the browser editor does. */
+export async function writeOnPage(server: TestServer, api: ApiClient, pageId: string, paragraphs: string[]): Promise<void> {
+  const client = await connectCollab(server.url, pageId, api.sessionCookie);
+  try {
+    const editor = lexicalEditorOn(client);
+    editor.update(
+      () => {
+        for (const text of paragraphs) $getRoot().append($createParagraphNode().append($createTextNode(text)));
+      },
+      { discrete: true },
+    );
+    await serverCaughtUp(client);
+  } finally {
+    client.destroy();
+  }
+}
+
+export const signBody = (person: TestPerson, supervisorId: string, meaning = 'performed') => ({
+  email: person.email,
+  password: person.password,
+  meaning,
+  supervisorId,
+});
+
+export const countersignBody = (person: TestPerson, meaning = 'witnessed') => ({ email: person.email, password: person.password, meaning });
+
+/** The caught mail arrives a moment after the send; wait for the message we expect. */
+export async function mailTo(admin: ApiClient, address: string, subjectIncludes: string): Promise<{ subject: string; text: string }> {
+  const started = Date.now();
+  for (;;) {
+    const mail = await latestMailTo(admin, address);
+    if (mail?.subject.includes(subjectIncludes)) return mail;
+    if (Date.now() - started > 10_000) throw new Error(`no mail "${subjectIncludes}" to ${address}; latest: ${mail?.subject}`);
+    await new Promise((resolve) => setTimeout(resolve, 50));
+  }
+}
