@@ -13,6 +13,8 @@ import { pageRoutes } from './routes/pages';
 import { peopleRoutes } from './routes/people';
 import { signingRoutes } from './routes/signing';
 import { auditRoutes } from './routes/audit';
+import { attachmentRoutes } from './routes/attachments';
+import { historyRoutes } from './routes/history';
 
 /** The HTTP application without a listening socket, so tests can run it on any port. */
 export function createApp(deps: AppDeps): express.Express {
@@ -45,6 +47,8 @@ export function createApp(deps: AppDeps): express.Express {
   api.use(pageRoutes(deps));
   api.use(signingRoutes(deps));
   api.use(auditRoutes(deps));
+  api.use(attachmentRoutes(deps));
+  api.use(historyRoutes(deps));
   api.use(() => {
     throw new HttpError(404, 'not_found', 'No such API route');
   });
