@@ -64,7 +64,8 @@ export class Room {
   private lastUpdateId: number;
   private uncompacted: number;
   private authorsSinceSnapshot: Set<string>;
-  private lastSnapshotAt: number;
+  /** When the first edit after the latest history snapshot was stored (null: none since). */
+  private firstEditSinceSnapshotAt: number | null;
   private lastUpdateByUser = new Map<string, number>();
   private projectionTimer: NodeJS.Timeout | null = null;
   private firstUnprojectedAt = 0;
@@ -80,12 +81,12 @@ export class Room {
     private locked: boolean,
     private readonly timings: CollabTimings,
     private readonly onUnloaded: () => void,
-    stored: { lastUpdateId: number; uncompacted: number; authors: string[]; lastSnapshotAt: number },
+    stored: { lastUpdateId: number; uncompacted: number; authors: string[] },
   ) {
     this.lastUpdateId = stored.lastUpdateId;
     this.uncompacted = stored.uncompacted;
     this.authorsSinceSnapshot = new Set(stored.authors);
-    this.lastSnapshotAt = stored.lastSnapshotAt;
+    this.firstEditSinceSnapshotAt = stored.authors.length > 0 ? Date.now() : null;
     this.doc.on('update', (update: Uint8Array, origin: unknown) => this.relay(update, origin));
     this.awareness.on('update', (changes: AwarenessChanges, origin: unknown) => this.relayAwareness(changes, origin));
     this.announceLock();
@@ -103,7 +104,6 @@ export class Room {
       lastUpdateId: stored.updates.at(-1)?.id ?? stored.throughUpdateId,
       uncompacted: stored.updates.length,
       authors: stored.authorsSinceSnapshot,
-      lastSnapshotAt: stored.lastSnapshotAt?.getTime() ?? 0,
     });
     Y.transact(room.doc, () => {
       if (stored.compacted) Y.applyUpdate(room.doc, stored.compacted);
@@ -245,6 +245,7 @@ export class Room {
     for (const entry of batch) {
       Y.applyUpdate(this.doc, entry.update, entry.conn);
       this.authorsSinceSnapshot.add(entry.userId);
+      this.firstEditSinceSnapshotAt ??= at.getTime();
       this.lastUpdateByUser.set(entry.userId, at.getTime());
     }
     this.uncompacted += batch.length;
@@ -297,7 +298,7 @@ export class Room {
     const now = Date.now();
     const idle = [...this.lastUpdateByUser].filter(([, at]) => now - at >= this.timings.sessionIdleMs).map(([userId]) => userId);
     if (idle.length > 0) void this.run(() => this.endSessions(idle)).catch(logFailure('closing editing sessions'));
-    if (this.authorsSinceSnapshot.size > 0 && now - this.lastSnapshotAt >= this.timings.snapshotEveryMs) {
+    if (this.firstEditSinceSnapshotAt !== null && now - this.firstEditSinceSnapshotAt >= this.timings.snapshotEveryMs) {
       void this.run(() => this.snapshot('activity')).catch(logFailure('history snapshot'));
     }
   }
@@ -325,7 +326,7 @@ export class Room {
     const authors = [...this.authorsSinceSnapshot];
     const id = await saveSnapshot(this.db, this.pageId, reason, Y.encodeStateAsUpdate(this.doc), authors);
     for (const author of authors) this.authorsSinceSnapshot.delete(author);
-    this.lastSnapshotAt = Date.now();
+    this.firstEditSinceSnapshotAt = null;
     return id;
   }
 

@@ -11,7 +11,6 @@ export interface StoredPage {
   compacted: Uint8Array | null;
   throughUpdateId: number;
   updates: { id: number; update: Uint8Array }[];
-  lastSnapshotAt: Date | null;
   /** Users whose updates arrived after the latest history snapshot (survives a crash). */
   authorsSinceSnapshot: string[];
 }
@@ -47,7 +46,6 @@ export async function loadPage(db: Database, pageId: string): Promise<StoredPage
     compacted: compacted?.state ?? null,
     throughUpdateId,
     updates,
-    lastSnapshotAt: latest?.takenAt ?? null,
     authorsSinceSnapshot: authors.map((a) => a.userId as string),
   };
 }

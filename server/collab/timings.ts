@@ -4,7 +4,7 @@ export interface CollabTimings {
   projectionDelayMs: number;
   /** ... but never later than this after the first unprojected change. */
   projectionMaxDelayMs: number;
-  /** A history snapshot is taken when there were edits and this long has passed since the last. */
+  /** A history snapshot is taken once this long has passed since the first edit after the last one. */
   snapshotEveryMs: number;
   /** Appended updates are folded into the page's state row once this many have piled up. */
   compactAfterUpdates: number;

@@ -67,6 +67,17 @@ export async function waitFor(condition: () => boolean, what: string, timeoutMs 
   }
 }
 
+/** Polls an async reading until it satisfies `ok` (background work such as the projection). */
+export async function eventually<T>(read: () => Promise<T>, ok: (value: T) => boolean, what: string, timeoutMs = 10_000): Promise<T> {
+  const started = Date.now();
+  for (;;) {
+    const value = await read();
+    if (ok(value)) return value;
+    if (Date.now() - started > timeoutMs) throw new Error(`timed out waiting for ${what}`);
+    await new Promise((resolve) => setTimeout(resolve, 20));
+  }
+}
+
 /**
  * Resolves once the server has handled everything this client sent before: the server reads a
  * connection's messages in order, so the answer to an awareness query comes after them.
