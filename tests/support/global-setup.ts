@@ -13,12 +13,20 @@ import { startLocalStack } from '../../server/services/stack';
 export default async function setup() {
   const dataDir = fs.mkdtempSync(path.join(os.tmpdir(), 'quillane-test-'));
   const stack = await startLocalStack(dataDir);
-  const { db, pool } = connectDatabase(stack.env.DATABASE_URL);
-  await seedDemo(db);
-  await pool.end();
-  Object.assign(process.env, stack.env, { NODE_ENV: 'test' });
-  return async () => {
+  const teardown = async () => {
     await stack.stop();
     fs.rmSync(dataDir, { recursive: true, force: true });
   };
+  const { db, pool } = connectDatabase(stack.env.DATABASE_URL);
+  try {
+    await seedDemo(db);
+  } catch (error) {
+    // vitest runs no teardown when setup throws: stop PostgreSQL here or it outlives the run.
+    await pool.end();
+    await teardown();
+    throw error;
+  }
+  await pool.end();
+  Object.assign(process.env, stack.env, { NODE_ENV: 'test' });
+  return teardown;
 }
