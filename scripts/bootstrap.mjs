@@ -61,7 +61,9 @@ if (!hasPostgresServer()) aptInstall('postgresql', 'the database server');
 if (mode === 'test' && !fs.existsSync('/usr/bin/chromium')) aptInstall('chromium', 'for the browser tests');
 
 const tsx = path.join(root, 'node_modules', '.bin', 'tsx');
-const child = spawn(tsx, [path.join(root, 'scripts', `${mode}.ts`), ...passThrough], { cwd: root, stdio: 'inherit' });
+// The locked AWS SDK supports this Node.js; its notice about future releases is noise at every start.
+const env = { AWS_SDK_JS_NODE_VERSION_SUPPORT_WARNING_DISABLED: 'true', ...process.env };
+const child = spawn(tsx, [path.join(root, 'scripts', `${mode}.ts`), ...passThrough], { cwd: root, stdio: 'inherit', env });
 // The child shares our terminal, so Ctrl-C reaches it directly; SIGTERM is passed on explicitly.
 process.on('SIGINT', () => undefined);
 process.on('SIGTERM', () => child.kill('SIGTERM'));
