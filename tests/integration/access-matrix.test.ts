@@ -1,8 +1,7 @@
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { ApiClient, type ApiResponse } from '../support/api';
-import { createPerson, signedInAs, uniqueEmail, type TestPerson } from '../support/fixtures';
+import { createPerson, insertInvitation, insertPasswordReset, signedInAs, uniqueEmail, type TestPerson } from '../support/fixtures';
 import { startServer, type TestServer } from '../support/server';
-import { newToken } from '../../server/auth/tokens';
 
 // Every route of /work/notes/API.md tried by every kind of caller. The expected statuses are the
 // table in API.md and the role meanings in DESIGN.md; "non-members get 404, not 403" hides which
@@ -34,27 +33,9 @@ beforeAll(async () => {
   expect((await owner.put(`/api/notebooks/${notebookId}/members`, { userId: people.supervisor.id, role: 'editor' })).status).toBe(200);
   expect((await owner.put(`/api/notebooks/${notebookId}/members`, { userId: people.viewer.id, role: 'reader' })).status).toBe(200);
   pageId = (await owner.post(`/api/notebooks/${notebookId}/pages`, { title: 'Matrix page' })).body.id;
-  liveInvitationToken = await insertInvitation();
+  liveInvitationToken = await insertInvitation(server.deps);
 });
 afterAll(() => server.close());
-
-async function insertInvitation(): Promise<string> {
-  const { token, tokenHash } = newToken();
-  await server.deps.pool.query(
-    "insert into invitations (email, name, role, token_hash, expires_at) values ($1, 'Matrix Invitee', 'chemist', $2, now() + interval '1 day')",
-    [uniqueEmail('matrix-invitee'), tokenHash],
-  );
-  return token;
-}
-
-async function insertReset(person: TestPerson): Promise<string> {
-  const { token, tokenHash } = newToken();
-  await server.deps.pool.query("insert into password_resets (user_id, token_hash, expires_at) values ($1, $2, now() + interval '1 hour')", [
-    person.id,
-    tokenHash,
-  ]);
-  return token;
-}
 
 /** Someone to change, add or remove, so that one cell's success does not affect the next. */
 const bystander = () => createPerson(server.deps, 'chemist', 'matrix-bystander');
@@ -94,14 +75,14 @@ const routes: RouteCase[] = [
   {
     route: 'POST /api/auth/accept-invitation',
     ownSession: true,
-    call: async (api) => api.post('/api/auth/accept-invitation', { token: await insertInvitation(), password: 'matrix-password-1' }),
+    call: async (api) => api.post('/api/auth/accept-invitation', { token: await insertInvitation(server.deps), password: 'matrix-password-1' }),
     expected: everyone(200),
   },
   { route: 'POST /api/auth/password-reset', call: (api) => api.post('/api/auth/password-reset', { email: uniqueEmail('matrix-nobody') }), expected: everyone(202) },
   {
     route: 'POST /api/auth/password-reset/confirm',
     ownSession: true,
-    call: async (api) => api.post('/api/auth/password-reset/confirm', { token: await insertReset(await bystander()), password: 'matrix-password-2' }),
+    call: async (api) => api.post('/api/auth/password-reset/confirm', { token: await insertPasswordReset(server.deps, (await bystander()).id), password: 'matrix-password-2' }),
     expected: everyone(200),
   },
   { route: 'GET /api/users', call: (api) => api.get('/api/users'), expected: adminOnly(200) },

@@ -1,8 +1,7 @@
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { ApiClient } from '../support/api';
-import { createPerson, signedInAs, uniqueEmail, type TestPerson } from '../support/fixtures';
+import { createPerson, insertInvitation, insertPasswordReset, signedInAs, type TestPerson } from '../support/fixtures';
 import { startServer, type TestServer } from '../support/server';
-import { newToken } from '../../server/auth/tokens';
 
 // CSRF defence by origin: OWASP Cross-Site Request Forgery Prevention Cheat Sheet, "Verifying
 // Origin With Standard Headers" — a state-changing request whose Origin is missing or is not the
@@ -27,18 +26,8 @@ beforeAll(async () => {
   pageId = (await client.post(`/api/notebooks/${notebookId}/pages`, { title: 'Untouched title' })).body.id;
   await client.put(`/api/notebooks/${notebookId}/members`, { userId: member.id, role: 'reader' });
 
-  const invitation = newToken();
-  await server.deps.pool.query(
-    "insert into invitations (email, name, role, token_hash, expires_at) values ($1, 'Csrf Invitee', 'chemist', $2, now() + interval '1 day')",
-    [uniqueEmail('csrf-invitee'), invitation.tokenHash],
-  );
-  invitationToken = invitation.token;
-  const reset = newToken();
-  await server.deps.pool.query("insert into password_resets (user_id, token_hash, expires_at) values ($1, $2, now() + interval '1 hour')", [
-    member.id,
-    reset.tokenHash,
-  ]);
-  resetToken = reset.token;
+  invitationToken = await insertInvitation(server.deps, 'Csrf Invitee');
+  resetToken = await insertPasswordReset(server.deps, member.id);
 });
 afterAll(() => server.close());
 

@@ -1,6 +1,7 @@
 import { randomUUID } from 'node:crypto';
 import type { AppDeps } from '../../server/context';
 import { hashPassword } from '../../server/auth/passwords';
+import { newToken } from '../../server/auth/tokens';
 import { users } from '../../server/db/schema';
 import type { Role } from '../../shared/schemas/common';
 import { ApiClient, signedIn } from './api';
@@ -33,6 +34,23 @@ export async function createPerson(deps: AppDeps, role: Role, prefix: string = r
 
 export async function signedInAs(url: string, person: TestPerson): Promise<ApiClient> {
   return signedIn(url, person.email, person.password);
+}
+
+/** A live invitation written straight into the database; returns the token its link would carry. */
+export async function insertInvitation(deps: AppDeps, name = 'Test Invitee'): Promise<string> {
+  const { token, tokenHash } = newToken();
+  await deps.pool.query(
+    "insert into invitations (email, name, role, token_hash, expires_at) values ($1, $2, 'chemist', $3, now() + interval '1 day')",
+    [uniqueEmail('invitee'), name, tokenHash],
+  );
+  return token;
+}
+
+/** A live password-reset link for `userId`; returns its token. */
+export async function insertPasswordReset(deps: AppDeps, userId: string): Promise<string> {
+  const { token, tokenHash } = newToken();
+  await deps.pool.query("insert into password_resets (user_id, token_hash, expires_at) values ($1, $2, now() + interval '1 hour')", [userId, tokenHash]);
+  return token;
 }
 
 /** The newest caught message to `address`, read through the admins' mail view. */
