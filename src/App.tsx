@@ -1,5 +1,6 @@
 import { Navigate, type RouteObject } from 'react-router-dom';
 import { AppLayout } from './routes/AppLayout';
+import { CountersignQueueRoute } from './routes/CountersignQueueRoute';
 import { InviteRoute } from './routes/InviteRoute';
 import { MailRoute } from './routes/MailRoute';
 import { NotebookMembersRoute } from './routes/NotebookMembersRoute';
@@ -8,6 +9,7 @@ import { NotebooksRoute } from './routes/NotebooksRoute';
 import { NotFoundRoute } from './routes/NotFoundRoute';
 import { PageRoute } from './routes/PageRoute';
 import { PeopleRoute } from './routes/PeopleRoute';
+import { PrintRecordRoute } from './routes/PrintRecordRoute';
 import { ResetConfirmRoute } from './routes/ResetConfirmRoute';
 import { ResetRequestRoute } from './routes/ResetRequestRoute';
 import { SignInRoute } from './routes/SignInRoute';
@@ -26,6 +28,8 @@ export const routes: RouteObject[] = [
       { path: '/notebooks/:notebookId', element: <NotebookRoute /> },
       { path: '/notebooks/:notebookId/members', element: <NotebookMembersRoute /> },
       { path: '/pages/:pageId', element: <PageRoute /> },
+      { path: '/pages/:pageId/print', element: <PrintRecordRoute /> },
+      { path: '/countersign', element: <CountersignQueueRoute /> },
       { path: '/people', element: <PeopleRoute /> },
       { path: '/mail', element: <MailRoute /> },
       { path: '/mail/:mailId', element: <MailRoute /> },

@@ -21,3 +21,10 @@ export const MailIcon = () => (
     <path d="m2.25 4 5.75 4.5L13.75 4" />
   </svg>
 );
+
+export const CountersignIcon = () => (
+  <svg {...common}>
+    <path d="M2 12.5c1.5-2 2.5-4.5 3.5-4.5s.5 3 1.5 3 1.5-2 2.5-2 1 1.5 2 1.5" />
+    <path d="M2 14.25h12M10.5 2.5l3 3-5 5-3.5.5.5-3.5z" />
+  </svg>
+);

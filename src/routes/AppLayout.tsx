@@ -2,7 +2,7 @@ import { Navigate, Outlet, useLocation, useNavigate, useOutletContext } from 're
 import type { Me } from '../../shared/schemas';
 import { AppFrame, type NavItem } from '../components/AppFrame';
 import { ErrorState } from '../components/ErrorState';
-import { MailIcon, NotebookIcon, PeopleIcon } from '../components/icons';
+import { CountersignIcon, MailIcon, NotebookIcon, PeopleIcon } from '../components/icons';
 import { LoadingState } from '../components/LoadingState';
 import { useMe } from '../features/auth/api/queries';
 import { SignOutButton } from '../features/auth/components/SignOutButton';
@@ -10,6 +10,7 @@ import { roleLabels } from '../lib/roles';
 
 function navFor(me: Me): NavItem[] {
   const items: NavItem[] = [{ to: '/notebooks', label: 'Notebooks', icon: <NotebookIcon /> }];
+  if (me.role === 'supervisor') items.push({ to: '/countersign', label: 'To countersign', icon: <CountersignIcon /> });
   if (me.role === 'admin') {
     items.push({ to: '/people', label: 'People and roles', icon: <PeopleIcon /> }, { to: '/mail', label: 'Mail room', icon: <MailIcon /> });
   }
