@@ -26,6 +26,8 @@ export default defineConfig({
         codeSplitting: {
           groups: [
             { name: 'react', test: /node_modules[\\/](react|react-dom|scheduler|react-router|react-router-dom)[\\/]/, priority: 2 },
+            // openchemlib (over 1 MB) stays out of the shared chunk: it loads when a structure is shown.
+            { name: 'openchemlib', test: /node_modules[\\/]openchemlib[\\/]/, priority: 3 },
             { name: 'vendor', test: /node_modules/, priority: 1 },
           ],
         },

@@ -1,12 +1,20 @@
+import { lazy } from 'react';
+import { useQueryClient } from '@tanstack/react-query';
 import { Link, useParams } from 'react-router-dom';
 import { ErrorState } from '../components/ErrorState';
 import { LoadingState } from '../components/LoadingState';
 import { PageBodySlot } from '../components/PageBodySlot';
 import { SafetyNote } from '../components/SafetyNote';
-import { usePage } from '../features/pages/api/queries';
+import { useMe } from '../features/auth/api/queries';
+import { pageKeys, usePage } from '../features/pages/api/queries';
 import { PageFacts } from '../features/pages/components/PageFacts';
 import { PageTitleEditor } from '../features/pages/components/PageTitleEditor';
+import { RecordPanel } from '../features/signing/components/RecordPanel';
 import { formatPageNumber } from '../lib/format';
+import { useSignedInPerson } from './AppLayout';
+
+// The editor (Lexical, Yjs) loads only when a page is opened.
+const PageEditor = lazy(() => import('../features/page-editor').then((module) => ({ default: module.PageEditor })));
 
 /**
  * One notebook page. The page's parts come from their features and are put together here:
@@ -15,6 +23,9 @@ import { formatPageNumber } from '../lib/format';
 export function PageRoute() {
   const { pageId = '' } = useParams();
   const page = usePage(pageId);
+  const person = useSignedInPerson();
+  const queryClient = useQueryClient();
+  const me = useMe();
 
   if (page.isPending) return <LoadingState label="Opening the page…" />;
   if (page.isError) return <ErrorState error={page.error} />;
@@ -36,8 +47,13 @@ export function PageRoute() {
       <PageTitleEditor page={data} />
       <PageFacts page={data} />
       <div className="mt-6 flex-1">
-        <PageBodySlot />
+        <PageBodySlot>
+          {me.data && (
+            <PageEditor key={data.id} pageId={data.id} canEdit={data.access.canEdit && !data.locked} me={{ id: me.data.id, name: me.data.name }} />
+          )}
+        </PageBodySlot>
       </div>
+      <RecordPanel pageId={data.id} me={person} onChanged={() => queryClient.invalidateQueries({ queryKey: pageKeys.one(data.id) })} />
       <footer className="mt-8 border-t border-fold pt-4">
         <SafetyNote />
       </footer>

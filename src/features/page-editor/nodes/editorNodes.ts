@@ -1,0 +1,7 @@
+import type { Klass, LexicalNode } from 'lexical';
+import { textNodes } from '../../../../shared/editor';
+import { AttachmentEmbedBlockNode } from './AttachmentEmbedBlockNode';
+import { StructureBlockNode } from './StructureBlockNode';
+
+/** shared/editor's page nodes with the two blocks in their rendering form. */
+export const editorNodes: Klass<LexicalNode>[] = [...textNodes, StructureBlockNode, AttachmentEmbedBlockNode];
