@@ -101,6 +101,8 @@ export function attachmentRoutes(deps: AppDeps): Router {
               ...file,
               pageId: access.page.id,
               uploaderId: user.id,
+              // Evaluated per row, so files of one request keep the order they were sent in.
+              createdAt: sql`clock_timestamp()`,
               addendum: sql`(select ${pages.locked} from ${pages} where ${pages.id} = ${access.page.id})`,
             })),
           )
@@ -128,9 +130,9 @@ export function attachmentRoutes(deps: AppDeps): Router {
       await Promise.all(files.map((file) => removeObject(storage, file.storageKey)));
       throw error;
     }
-    const rows = await listRows(eq(attachments.pageId, access.page.id));
-    const added = new Set(files.map((f) => f.id));
-    res.status(201).json(rows.filter((row) => added.has(row.id)).map((row) => summary(row, access, user)));
+    const rows = new Map((await listRows(eq(attachments.pageId, access.page.id))).map((row) => [row.id, row]));
+    // In the order they were sent: files of one request share their creation time.
+    res.status(201).json(files.map((file) => summary(rows.get(file.id)!, access, user)));
   });
 
   router.get('/pages/:id/attachments', async (req, res) => {
