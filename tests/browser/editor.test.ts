@@ -2,6 +2,7 @@ import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import type { Browser, BrowserContext, Page } from 'playwright-core';
 import { DEMO_PASSWORD, signedIn, type ApiClient } from '../support/api';
 import { launchBrowser, signIn } from '../support/browser';
+import { getCollabHub } from '../../server/collab';
 import { startServer, type TestServer } from '../support/server';
 import { reference } from '../unit/chem/support/rdkit';
 
@@ -141,6 +142,25 @@ describe('page editor, two chemists on one page', () => {
     await typeAtEnd(first, ' Marker after refusal.');
     await expect.poll(() => pageText(second).textContent(), { timeout: 15_000 }).toContain('Marker after refusal.');
     expect(await second.getByTestId('structure-block').count()).toBe(before);
+  });
+});
+
+describe('page history', () => {
+  it('lists saved versions and opens one read only with the text of that moment', async () => {
+    await getCollabHub(server.deps).takeSnapshot(pageId, 'activity');
+    await typeAtEnd(first, ' Written after the snapshot.');
+    await expect.poll(() => pageText(second).textContent(), { timeout: 15_000 }).toContain('Written after the snapshot.');
+
+    await second.getByRole('region', { name: 'Earlier versions' }).getByRole('button', { name: 'Show' }).click();
+    await second.getByTestId('history-entry').first().click();
+    const viewer = second.getByRole('dialog', { name: /Earlier version/ });
+    const oldText = viewer.getByTestId('snapshot-text');
+    await expect.poll(() => oldText.textContent(), { timeout: 15_000 }).toContain('Observed: clear, colourless liquid.');
+    expect(await oldText.textContent()).not.toContain('Written after the snapshot.');
+    await expect(oldText.getAttribute('contenteditable')).resolves.toBe('false');
+    await viewer.getByTestId('structure-name').waitFor();
+    await second.screenshot({ path: '/tmp/editor-history.png' });
+    await viewer.getByRole('button', { name: 'Close' }).click();
   });
 });
 
