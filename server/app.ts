@@ -15,6 +15,7 @@ import { signingRoutes } from './routes/signing';
 import { auditRoutes } from './routes/audit';
 import { attachmentRoutes } from './routes/attachments';
 import { historyRoutes } from './routes/history';
+import { chemRoutes } from './routes/chem';
 
 /** The HTTP application without a listening socket, so tests can run it on any port. */
 export function createApp(deps: AppDeps): express.Express {
@@ -49,6 +50,7 @@ export function createApp(deps: AppDeps): express.Express {
   api.use(auditRoutes(deps));
   api.use(attachmentRoutes(deps));
   api.use(historyRoutes(deps));
+  api.use(chemRoutes());
   api.use(() => {
     throw new HttpError(404, 'not_found', 'No such API route');
   });
