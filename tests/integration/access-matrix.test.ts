@@ -85,6 +85,8 @@ const routes: RouteCase[] = [
     call: async (api) => api.post('/api/auth/password-reset/confirm', { token: await insertPasswordReset(server.deps, (await bystander()).id), password: 'matrix-password-2' }),
     expected: everyone(200),
   },
+  { route: 'GET /api/people', call: (api) => api.get('/api/people'), expected: { ...signedInOnly(200), viewer: 403 } },
+  { route: 'POST /api/chem/describe', call: (api) => api.post('/api/chem/describe', { smiles: 'CCC' }), expected: signedInOnly(200) },
   { route: 'GET /api/users', call: (api) => api.get('/api/users'), expected: adminOnly(200) },
   { route: 'PATCH /api/users/:id', call: async (api) => api.patch(`/api/users/${(await bystander()).id}`, { role: 'supervisor' }), expected: adminOnly(200) },
   { route: 'GET /api/invitations', call: (api) => api.get('/api/invitations'), expected: adminOnly(200) },
