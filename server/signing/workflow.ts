@@ -143,18 +143,23 @@ export async function writePageSignature(
   return signature.id;
 }
 
+/** Settles a waiting request exactly once; a second reviewer racing the first gets a conflict. */
+async function resolveRequest(tx: Tx, requestId: string, state: 'countersigned' | 'returned') {
+  const [claimed] = await tx
+    .update(countersignRequests)
+    .set({ state, resolvedAt: now() })
+    .where(and(eq(countersignRequests.id, requestId), eq(countersignRequests.state, 'waiting')))
+    .returning();
+  if (!claimed) throw conflict('nothing_to_countersign', 'This was countersigned or returned meanwhile');
+}
+
 /** The database part of countersigning: claim the request, store the witness signature, audit it. */
 export async function writeCountersignature(
   tx: Tx,
   args: { page: PageRow; addendum: AddendumRow | null; request: CountersignRequestRow; signer: Signer; meaning: CountersignInput['meaning']; content: RecordContent },
 ): Promise<string> {
   const { page, addendum, request, signer } = args;
-  const [claimed] = await tx
-    .update(countersignRequests)
-    .set({ state: 'countersigned', resolvedAt: now() })
-    .where(and(eq(countersignRequests.id, request.id), eq(countersignRequests.state, 'waiting')))
-    .returning();
-  if (!claimed) throw conflict('nothing_to_countersign', 'This was countersigned or returned meanwhile');
+  await resolveRequest(tx, request.id, 'countersigned');
   const signature = await insertSignature(tx, { pageId: page.id, addendumId: addendum?.id ?? null, role: 'witness', signer, meaningCode: args.meaning, content: args.content });
   if (!addendum) await tx.update(pages).set({ status: 'witnessed', updatedAt: now() }).where(eq(pages.id, page.id));
   await appendInTransaction(tx, {
@@ -263,12 +268,7 @@ export async function returnWork(deps: AppDeps, hub: SigningHub, user: User, acc
   await assertReviewer(db, user, request, authorId);
 
   await db.transaction(async (tx) => {
-    const [claimed] = await tx
-      .update(countersignRequests)
-      .set({ state: 'returned', resolvedAt: now() })
-      .where(and(eq(countersignRequests.id, request.id), eq(countersignRequests.state, 'waiting')))
-      .returning();
-    if (!claimed) throw conflict('nothing_to_countersign', 'This was countersigned or returned meanwhile');
+    await resolveRequest(tx, request.id, 'returned');
     const [returned] = await tx
       .insert(pageReturns)
       .values({ requestId: request.id, pageId: page.id, addendumId: addendum?.id ?? null, returnedBy: user.id, returnedByName: user.name, comment: input.comment, returnedAt: now() })

@@ -223,20 +223,10 @@ describe('role refusals', () => {
   it('a supervisor cannot countersign their own page', async () => {
     const pageId = await newPage(g.supervisor.api, g.notebookId, 'The supervisor’s own page');
     await writeOnPage(server, g.supervisor.api, pageId, ['Reference sample prepared by the supervisor.']);
-    const signed = await g.supervisor.api.post(`/api/pages/${pageId}/sign`, {
-      email: g.supervisor.person.email,
-      password: g.supervisor.person.password,
-      meaning: 'performed',
-      supervisorId: g.supervisor.person.id,
-    });
+    const signed = await g.supervisor.api.post(`/api/pages/${pageId}/sign`, signBody(g.supervisor.person, g.supervisor.person.id));
     // Naming oneself as countersigner is refused outright.
     expect(signed.status).toBe(422);
-    const properly = await g.supervisor.api.post(`/api/pages/${pageId}/sign`, {
-      email: g.supervisor.person.email,
-      password: g.supervisor.person.password,
-      meaning: 'performed',
-      supervisorId: g.supervisor2.person.id,
-    });
+    const properly = await g.supervisor.api.post(`/api/pages/${pageId}/sign`, signBody(g.supervisor.person, g.supervisor2.person.id));
     expect(properly.status).toBe(201);
     const own = await g.supervisor.api.post(`/api/pages/${pageId}/countersign`, countersignBody(g.supervisor.person));
     expect(own.status).toBe(403);
