@@ -2,9 +2,11 @@ import { spawn } from 'node:child_process';
 import fs from 'node:fs';
 import path from 'node:path';
 import { connectDatabase } from '../server/db/client';
+import { loadConfig } from '../server/env';
 import { seedDemo } from '../server/seed/demo';
 import { DEMO_PASSWORD, demoPeople } from '../server/seed/demoPeople';
 import { startLocalStack } from '../server/services/stack';
+import { createStorage, ensureBucket } from '../server/storage/s3';
 import { buildClient } from './buildClient';
 
 /**
@@ -32,7 +34,9 @@ async function main() {
 
   try {
     const { db, pool } = connectDatabase(stack.env.DATABASE_URL);
-    const seeded = await seedDemo(db);
+    const storage = createStorage(loadConfig({ ...process.env, ...stack.env }));
+    await ensureBucket(storage);
+    const seeded = await seedDemo(db, storage);
     await pool.end();
     console.log(seeded.created ? '[quillane] demo data seeded' : '[quillane] demo data found from an earlier start');
     console.log('[quillane] building the client ...');

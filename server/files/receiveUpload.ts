@@ -43,7 +43,8 @@ export function checkDeclaredSize(req: Request, limit: number): void {
   if (Number.isFinite(declared) && declared > limit + MULTIPART_ALLOWANCE) throw tooLarge(limit);
 }
 
-async function describe(
+/** What a stored file is: its media type from the content and, for spectra, the parsed data or why not. */
+export async function describeReceived(
   file: Omit<ReceivedFile, 'mediaType' | 'spectrum' | 'parseError'>,
   head: Buffer,
   whole: Buffer | null,
@@ -133,7 +134,7 @@ export function receiveFiles(req: Request, storage: Storage, limit: number): Pro
       uploads.push(upload);
       const originalName = recordedOriginalName(info.filename ?? '');
       const stored = upload.done().then(() =>
-        describe(
+        describeReceived(
           { id, storageKey, originalName, displayName: displayNameFor(originalName), size, sha256: hash.digest('hex') },
           Buffer.concat(headChunks),
           kept ? Buffer.concat(kept) : null,

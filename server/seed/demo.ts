@@ -2,8 +2,10 @@ import { eq } from 'drizzle-orm';
 import { recordAuditEvent } from '../audit/record';
 import { hashPassword } from '../auth/passwords';
 import type { Database } from '../db/client';
+import type { Storage } from '../storage/s3';
 import { memberships, notebooks, pages, users } from '../db/schema';
 import { DEMO_PASSWORD, demoPeople } from './demoPeople';
+import { seedDemoAttachments } from './demoAttachments';
 import { seedDemoSigning } from './demoSigning';
 
 export type DemoUsers = Record<string, { id: string; name: string }>;
@@ -25,7 +27,7 @@ const demoNotebooks = [
  * Seeds the demo scenario once: the marker is the demo admin account. Later capabilities (page
  * content, signatures, spectra) add their parts through their own seed steps.
  */
-export async function seedDemo(db: Database): Promise<{ created: boolean; users: DemoUsers }> {
+export async function seedDemo(db: Database, storage: Storage): Promise<{ created: boolean; users: DemoUsers }> {
   const [marker] = await db.select().from(users).where(eq(users.email, demoPeople[0].email));
   if (marker) {
     const rows = await db.select().from(users);
@@ -57,6 +59,7 @@ export async function seedDemo(db: Database): Promise<{ created: boolean; users:
       await recordAuditEvent(db, { type: 'page.created', actor: author, notebookId: notebook.id, pageId: page.id, details: { number: i + 1, title } });
     }
   }
+  await seedDemoAttachments(db, storage, byEmail);
   await seedDemoSigning(db, byEmail);
   return { created: true, users: byEmail };
 }

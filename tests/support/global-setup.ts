@@ -2,8 +2,10 @@ import fs from 'node:fs';
 import os from 'node:os';
 import path from 'node:path';
 import { connectDatabase } from '../../server/db/client';
+import { loadConfig } from '../../server/env';
 import { seedDemo } from '../../server/seed/demo';
 import { startLocalStack } from '../../server/services/stack';
+import { createStorage, ensureBucket } from '../../server/storage/s3';
 
 /**
  * Real services for the integration and browser tests, on throwaway data: a temporary PostgreSQL
@@ -19,7 +21,9 @@ export default async function setup() {
   };
   const { db, pool } = connectDatabase(stack.env.DATABASE_URL);
   try {
-    await seedDemo(db);
+    const storage = createStorage(loadConfig({ ...process.env, ...stack.env }));
+    await ensureBucket(storage);
+    await seedDemo(db, storage);
   } catch (error) {
     // vitest runs no teardown when setup throws: stop PostgreSQL here or it outlives the run.
     await pool.end();
