@@ -1,6 +1,7 @@
 import { and, eq } from 'drizzle-orm';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import { auditEvents } from '../../server/db/schema';
+import { auditEvents, notebooks, pages } from '../../server/db/schema';
+import { signedIn } from '../support/api';
 import { startServer, type TestServer } from '../support/server';
 import { countersignBody, mailTo, newPage, signBody, signingGroup, writeOnPage, type SigningGroup } from '../support/signing';
 
@@ -258,5 +259,26 @@ describe('printable record', () => {
     expect(pdf.headers.get('content-disposition')).toMatch(/^attachment; filename="?notebook-page-\d{3}-record\.pdf"?$/);
     const bytes = Buffer.from(await pdf.arrayBuffer());
     expect(bytes.subarray(0, 5).toString('latin1')).toBe('%PDF-');
+  });
+});
+
+describe('demo scenario', () => {
+  it('has a countersigned page and a page waiting for the demo supervisor, both verifying intact', async () => {
+    const supervisor = await signedIn(server.url, 'supervisor@saltmarsh.test');
+    const demoPage = async (notebook: string) => {
+      const [row] = await server.deps.db
+        .select({ id: pages.id })
+        .from(pages)
+        .innerJoin(notebooks, eq(notebooks.id, pages.notebookId))
+        .where(and(eq(notebooks.title, notebook), eq(pages.number, 1)));
+      return row.id;
+    };
+    const witnessed = await demoPage('Fruity esters from short-chain acids');
+    const waiting = await demoPage('Solvent and reagent checks');
+    expect((await supervisor.get(`/api/pages/${witnessed}/record`)).body.status).toBe('witnessed');
+    expect((await supervisor.get(`/api/pages/${waiting}/record`)).body.status).toBe('signed');
+    expect((await supervisor.get(`/api/pages/${witnessed}/verify`)).body.intact).toBe(true);
+    expect((await supervisor.get(`/api/pages/${waiting}/verify`)).body.intact).toBe(true);
+    expect((await supervisor.get('/api/signing/queue')).body.some((q: { pageId: string }) => q.pageId === waiting)).toBe(true);
   });
 });
