@@ -25,7 +25,10 @@ function reference(smiles: string) {
     labels: [
       ...tags.CIP_atoms.map(([a, l]) => `${a}:${strip(l)}`),
       ...tags.CIP_bonds.map(([a, b, l]) => `${Math.min(a, b)}-${Math.max(a, b)}:${strip(l)}`),
-    ].sort(),
+    ]
+      // '?' marks a potential centre the input left unspecified: no descriptor, like ours.
+      .filter((label) => !label.endsWith(':?'))
+      .sort(),
   };
 }
 
