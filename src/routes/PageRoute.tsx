@@ -5,16 +5,26 @@ import { ErrorState } from '../components/ErrorState';
 import { LoadingState } from '../components/LoadingState';
 import { PageBodySlot } from '../components/PageBodySlot';
 import { SafetyNote } from '../components/SafetyNote';
+import { AttachmentsPanel, type AttachmentRenderers } from '../features/attachments';
 import { useMe } from '../features/auth/api/queries';
 import { pageKeys, usePage } from '../features/pages/api/queries';
 import { PageFacts } from '../features/pages/components/PageFacts';
 import { PageTitleEditor } from '../features/pages/components/PageTitleEditor';
+import type { EmbedRenderers } from '../features/page-editor';
 import { RecordPanel } from '../features/signing/components/RecordPanel';
+import { SpectrumEmbed, SpectrumThumbnail, SpectrumView } from '../features/spectra';
 import { formatPageNumber } from '../lib/format';
 import { useSignedInPerson } from './AppLayout';
 
 // The editor (Lexical, Yjs) loads only when a page is opened.
 const PageEditor = lazy(() => import('../features/page-editor').then((module) => ({ default: module.PageEditor })));
+
+// Spectra are drawn by their own feature, both inside the text and in the page's file list.
+const embedRenderers: EmbedRenderers = { attachment: (props) => <SpectrumEmbed {...props} /> };
+const attachmentRenderers: AttachmentRenderers = {
+  thumbnail: (attachment) => attachment.spectrum && <SpectrumThumbnail spectrum={attachment.spectrum} />,
+  detail: (attachment) => <SpectrumView attachmentId={attachment.id} />,
+};
 
 /**
  * One notebook page. The page's parts come from their features and are put together here:
@@ -49,10 +59,12 @@ export function PageRoute() {
       <div className="mt-6 flex-1">
         <PageBodySlot>
           {me.data && (
-            <PageEditor key={data.id} pageId={data.id} canEdit={data.access.canEdit && !data.locked} me={{ id: me.data.id, name: me.data.name }} />
+            <PageEditor key={data.id} pageId={data.id} canEdit={data.access.canEdit && !data.locked} me={{ id: me.data.id, name: me.data.name }} embedRenderers={embedRenderers} />
           )}
         </PageBodySlot>
       </div>
+      {/* Files added to a signed page are kept as addenda, so writers may still add them. */}
+      <AttachmentsPanel pageId={data.id} canUpload={data.access.role !== 'reader' && person.role !== 'viewer'} renderers={attachmentRenderers} />
       <RecordPanel pageId={data.id} me={person} onChanged={() => queryClient.invalidateQueries({ queryKey: pageKeys.one(data.id) })} />
       <footer className="mt-8 border-t border-fold pt-4">
         <SafetyNote />

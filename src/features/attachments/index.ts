@@ -1,0 +1,2 @@
+export { AttachmentsPanel } from './components/AttachmentsPanel';
+export type { AttachmentRenderers } from './components/AttachmentItem';
