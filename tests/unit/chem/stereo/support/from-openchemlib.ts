@@ -7,7 +7,7 @@
  * an implicit hydrogen last, 1 = looking from the first, the rest clockwise; bond parity 1/2
  * refers to the lowest-index neighbour on each end, 1 = trans, 2 = cis.
  */
-import OCL from 'openchemlib';
+import * as OCL from 'openchemlib';
 import type { Atom, Bond, BondOrder, MolGraph } from '../../../../../shared/chem/graph/types';
 
 export function graphFromSmiles(smiles: string): MolGraph {
