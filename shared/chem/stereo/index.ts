@@ -44,6 +44,8 @@ function findUnits(graph: MolGraph): StereoUnit[] {
 }
 
 function assign(graph: MolGraph): StereoAssignment {
+  // The parser notes stereo it could not carry into the graph (axial marks, odd centres).
+  if (graph.stereoNotes?.length) throw new StereoRefusal(`stereo feature not handled: ${graph.stereoNotes[0]}`);
   const units = findUnits(graph);
   const result: StereoAssignment = { centres: [], doubleBonds: [] };
   if (units.length === 0) return result;
