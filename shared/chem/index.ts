@@ -32,12 +32,19 @@ export function describeSync(input: ChemInput, options?: { style?: NameStyle }):
   const { graph, canonical, smiles } = parseInput(input);
   const style = options?.style ?? 'preferred';
   const refusal = stereoGate(graph);
+  let canonicalText: string | undefined;
+  let smilesText: string | undefined;
+  // canonical and smiles cost more than naming itself; they are computed when first read.
   return {
     formula: hillFormula(graph),
     averageMass: averageMass(graph),
     monoisotopicMass: monoisotopicMass(graph),
-    canonical,
-    smiles,
+    get canonical() {
+      return (canonicalText ??= canonical());
+    },
+    get smiles() {
+      return (smilesText ??= smiles());
+    },
     naming: refusal ? { ok: false, reason: refusal } : nameGraph(graph, style),
   };
 }

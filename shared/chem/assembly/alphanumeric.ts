@@ -5,8 +5,16 @@
  * italic prefix (none < sec < tert, P-14.5.2) and lower locants at the first point of
  * difference (P-14.5.4).
  */
+const lettersCache = new Map<string, string>();
+
 export function alphaLetters(name: string): string {
-  return name.replace(/\b(sec|tert)-/g, '').replace(/[^a-z]/g, '');
+  let letters = lettersCache.get(name);
+  if (letters === undefined) {
+    letters = name.replace(/\b(sec|tert)-/g, '').replace(/[^a-z]/g, '');
+    if (lettersCache.size > 50_000) lettersCache.clear();
+    lettersCache.set(name, letters);
+  }
+  return letters;
 }
 
 function italicRank(name: string): number {
@@ -25,6 +33,7 @@ export function compareNumberLists(a: readonly number[], b: readonly number[]): 
 }
 
 export function compareAlphanumerical(a: string, b: string): number {
+  if (a === b) return 0;
   const la = alphaLetters(a);
   const lb = alphaLetters(b);
   if (la !== lb) return la < lb ? -1 : 1;

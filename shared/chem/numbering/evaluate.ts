@@ -12,6 +12,8 @@ export interface Evaluated {
   prefixes: Prefix[];
   /** Set when a multiple bond closes the ring between the last and the first atom. */
   closesRing: boolean;
+  /** Sorted locant sets the numbering rules compare, computed once. */
+  keys: { multiple: number[]; double: number[]; prefixes: number[]; citation: number[] | null };
 }
 
 export function evaluate(ctx: NamingContext, skeleton: Skeleton, attachment: Attachment | null): Evaluated {
@@ -38,5 +40,12 @@ export function evaluate(ctx: NamingContext, skeleton: Skeleton, attachment: Att
     }
   });
   const freeValence = attachment ? [atoms.indexOf(attachment.atom) + 1] : [];
-  return { skeleton, attachment, freeValence, multiple, prefixes, closesRing };
+  const ascending = (values: number[]) => values.sort((x, y) => x - y);
+  const keys = {
+    multiple: ascending(multiple.map((m) => m.locant)),
+    double: ascending(multiple.filter((m) => m.order === 2).map((m) => m.locant)),
+    prefixes: ascending(prefixes.map((p) => p.locant)),
+    citation: null,
+  };
+  return { skeleton, attachment, freeValence, multiple, prefixes, closesRing, keys };
 }

@@ -3,18 +3,19 @@ import type { Evaluated } from './evaluate';
 
 type Comparator = (a: Evaluated, b: Evaluated) => number;
 
-const ascending = (values: number[]) => [...values].sort((x, y) => x - y);
 const more = (count: (e: Evaluated) => number): Comparator => (a, b) => count(b) - count(a);
-const lower = (locants: (e: Evaluated) => number[]): Comparator => (a, b) => compareNumberLists(ascending(locants(a)), ascending(locants(b)));
+/** `locants` must return an ascending list. */
+const lower = (locants: (e: Evaluated) => number[]): Comparator => (a, b) => compareNumberLists(locants(a), locants(b));
 
 /**
  * Locants of the prefixes in order of citation (alphanumerical order of their names), for
  * P-31.1.4.3.4 / P-45.2.3: lowest locants to the prefix cited first.
  */
 function locantsInCitationOrder(e: Evaluated): number[] {
-  return [...e.prefixes]
+  e.keys.citation ??= [...e.prefixes]
     .sort((x, y) => compareAlphanumerical(x.substituent.name, y.substituent.name) || x.locant - y.locant)
     .map((p) => p.locant);
+  return e.keys.citation;
 }
 
 /**
@@ -33,23 +34,24 @@ function locantsInCitationOrder(e: Evaluated): number[] {
 const CRITERIA: Comparator[] = [
   more((e) => e.skeleton.atoms.length),
   more((e) => e.multiple.length),
-  more((e) => e.multiple.filter((m) => m.order === 2).length),
+  more((e) => e.keys.double.length),
   lower((e) => e.freeValence),
-  lower((e) => e.multiple.map((m) => m.locant)),
-  lower((e) => e.multiple.filter((m) => m.order === 2).map((m) => m.locant)),
+  lower((e) => e.keys.multiple),
+  lower((e) => e.keys.double),
   more((e) => e.prefixes.length),
-  lower((e) => e.prefixes.map((p) => p.locant)),
+  lower((e) => e.keys.prefixes),
   (a, b) => compareNumberLists(locantsInCitationOrder(a), locantsInCitationOrder(b)),
 ];
 
 export function bestCandidates(candidates: Evaluated[], extra: Comparator[] = []): Evaluated[] {
   let survivors = candidates;
-  for (const criterion of [...extra, ...CRITERIA]) {
-    if (survivors.length <= 1) break;
+  const apply = (criterion: Comparator) => {
     let best = survivors[0];
     for (const c of survivors) if (criterion(c, best) < 0) best = c;
     survivors = survivors.filter((c) => criterion(c, best) === 0);
-  }
+  };
+  for (const criterion of extra) if (survivors.length > 1) apply(criterion);
+  for (const criterion of CRITERIA) if (survivors.length > 1) apply(criterion);
   return survivors;
 }
 

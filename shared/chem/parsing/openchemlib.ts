@@ -28,20 +28,28 @@ export type ChemInput = { smiles: string } | { molfile: string };
 
 export interface ParsedMolecule {
   graph: MolGraph;
-  /** openchemlib's canonical ID code (constitution, charges, isotopes and stereo). */
-  canonical: string;
-  smiles: string;
+  /** openchemlib's canonical ID code (constitution, charges, isotopes and stereo); computed on demand. */
+  canonical: () => string;
+  /** openchemlib's canonical isomeric SMILES; computed on demand. */
+  smiles: () => string;
 }
 
 export function parseInput(input: ChemInput): ParsedMolecule {
   const { Molecule } = library();
   let molecule: OclMolecule;
+  let full = (): OclMolecule => molecule;
+  let stereo = true;
   if ('smiles' in input) {
     const smiles = input.smiles.trim();
     if (smiles === '') throw new ChemInputError('empty', 'the SMILES is empty');
     if (smiles.length > MAX_INPUT_CHARACTERS) tooLarge(`${smiles.length} characters`);
     checkSmilesSyntax(smiles);
-    molecule = guard(() => Molecule.fromSmiles(smiles), 'SMILES');
+    // Without invented 2D coordinates the parse is ~40x faster and the stereo parities are the
+    // same (they come from @/@@ and / \\); the canonical forms below use a full parse.
+    molecule = guard(() => Molecule.fromSmiles(smiles, { noCoordinates: true }), 'SMILES');
+    full = () => Molecule.fromSmiles(smiles);
+    // Parity perception is the costliest step and only marks (@, /, \\) can give parities.
+    stereo = /[@/\\]/.test(smiles);
   } else {
     const text = input.molfile;
     if (text.trim() === '') throw new ChemInputError('empty', 'the molfile is empty');
@@ -50,9 +58,11 @@ export function parseInput(input: ChemInput): ParsedMolecule {
     molecule = guard(() => Molecule.fromMolfile(text), 'molfile');
     if (molecule.getAllAtoms() === 0) throw new ChemInputError('unparsable', 'molfile: no atoms could be read');
   }
-  molecule.ensureHelperArrays(Molecule.cHelperParities);
-  const graph = toGraph(molecule, 'molfile' in input);
-  return { graph, canonical: molecule.getIDCode(), smiles: molecule.toIsomericSmiles() };
+  molecule.ensureHelperArrays(stereo ? Molecule.cHelperParities : Molecule.cHelperRings);
+  const graph = toGraph(molecule, 'molfile' in input, stereo);
+  let canonicalForm: OclMolecule | null = null;
+  const canonicalMolecule = () => (canonicalForm ??= full());
+  return { graph, canonical: () => canonicalMolecule().getIDCode(), smiles: () => canonicalMolecule().toIsomericSmiles() };
 }
 
 function guard(parse: () => OclMolecule, what: string): OclMolecule {
@@ -73,7 +83,7 @@ function tooLarge(what: string): never {
  * behind all other atoms) are folded into their neighbour's hydrogen count; isotope-labelled
  * hydrogens stay atoms so that formula and masses see them.
  */
-function toGraph(mol: OclMolecule, hasCoordinates: boolean): MolGraph {
+function toGraph(mol: OclMolecule, hasCoordinates: boolean, stereo: boolean): MolGraph {
   const kept = mol.getAtoms(); // atoms before this index are everything except plain hydrogens
   const heavy = Array.from({ length: kept }, (_, a) => a).filter((a) => mol.getAtomicNo(a) !== 1).length;
   if (heavy > MAX_HEAVY_ATOMS) {
@@ -83,7 +93,7 @@ function toGraph(mol: OclMolecule, hasCoordinates: boolean): MolGraph {
   for (let a = 0; a < kept; a++) {
     const symbol = mol.getAtomLabel(a);
     checkElement(symbol, null);
-    if (mol.getAtomicNo(a) === 0 || mol.getAtomList(a)?.length) {
+    if (mol.getAtomicNo(a) === 0 || (mol.isFragment() && mol.getAtomList(a)?.length)) {
       throw new ChemInputError('unsupported_feature', 'query atoms (atom lists, R groups) are not supported');
     }
     let plainHydrogens = 0;
@@ -116,8 +126,10 @@ function toGraph(mol: OclMolecule, hasCoordinates: boolean): MolGraph {
     bonds.push({ index: bonds.length, from, to, order: order as BondOrder, aromatic: mol.isAromaticBond(b), doubleBondStereo: null });
   }
   const graph: MolGraph = { atoms, bonds, adjacency: buildAdjacency(atoms.length, bonds), stereoNotes: [] };
-  readTetrahedralParities(mol, graph, kept);
-  readDoubleBondParities(mol, graph, kept, bondIndexOf);
+  if (stereo) {
+    readTetrahedralParities(mol, graph, kept);
+    readDoubleBondParities(mol, graph, kept, bondIndexOf);
+  }
   return graph;
 }
 
