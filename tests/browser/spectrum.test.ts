@@ -1,3 +1,4 @@
+import { ListObjectsV2Command } from '@aws-sdk/client-s3';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import type { Browser } from 'playwright-core';
 import { signedIn } from '../support/api';
@@ -104,4 +105,56 @@ describe('spectrum upload in the browser', () => {
     await expect.poll(() => reset.isDisabled()).toBe(true);
     await context.close();
   });
+
+  it('shows a progress bar per file and cancels one upload without keeping anything', async () => {
+    const context = await browser.newContext();
+    const page = await context.newPage();
+    await signIn(page, server.url, 'chemist@saltmarsh.test', 'quillane-demo');
+    await page.goto(`${server.url}/pages/${pageId}`);
+    const keysBefore = await storedKeys();
+    // Chromium's own network throttling slows the upload enough to watch it and cancel it.
+    const cdp = await context.newCDPSession(page);
+    await cdp.send('Network.enable');
+    await cdp.send('Network.emulateNetworkConditions', { offline: false, latency: 0, downloadThroughput: -1, uploadThroughput: 256 * 1024 });
+
+    const panel = page.getByRole('region', { name: 'Attached files' });
+    await panel.getByTestId('attachment-input').setInputFiles([{ name: 'slow raw data.bin', mimeType: 'application/octet-stream', buffer: Buffer.alloc(4 * 1024 * 1024, 7) }]);
+    const bar = panel.getByRole('progressbar', { name: 'Uploading slow raw data.bin' });
+    await expect.poll(async () => Number(await bar.getAttribute('aria-valuenow')), { timeout: 15_000 }).toBeGreaterThan(0);
+    expect(Number(await bar.getAttribute('aria-valuenow'))).toBeLessThan(100);
+    await panel.getByRole('button', { name: 'Cancel upload of slow raw data.bin' }).click();
+    await bar.waitFor({ state: 'detached' });
+
+    await cdp.send('Network.emulateNetworkConditions', { offline: false, latency: 0, downloadThroughput: -1, uploadThroughput: -1 });
+    const chemist = await signedIn(server.url, 'chemist@saltmarsh.test');
+    // The server notices the aborted request: no object stays in the bucket and no row is written.
+    await expect.poll(async () => (await storedKeys()).length, { timeout: 10_000 }).toBe(keysBefore.length);
+    const list = await chemist.get(`/api/pages/${pageId}/attachments`);
+    expect(list.body.map((a: { displayName: string }) => a.displayName)).not.toContain('slow raw data.bin');
+    await context.close();
+  });
+
+  it('accepts files dropped onto the panel', async () => {
+    const context = await browser.newContext();
+    const page = await context.newPage();
+    await signIn(page, server.url, 'chemist@saltmarsh.test', 'quillane-demo');
+    await page.goto(`${server.url}/pages/${pageId}`);
+    const panel = page.getByRole('region', { name: 'Attached files' });
+    await panel.getByRole('button', { name: 'Add files' }).waitFor();
+    const dataTransfer = await page.evaluateHandle(() => {
+      const transfer = new DataTransfer();
+      transfer.items.add(new File(['Chemical shift (ppm),Intensity\n0.9,10\n1.5,4\n2.0,30\n4.1,20\n'], 'dropped proton.csv', { type: 'text/csv' }));
+      return transfer;
+    });
+    await panel.dispatchEvent('dragover', { dataTransfer });
+    await panel.dispatchEvent('drop', { dataTransfer });
+    const item = panel.getByTestId('attachment-item').filter({ hasText: 'dropped proton.csv' });
+    await item.getByTestId('spectrum-thumbnail').waitFor();
+    await context.close();
+  });
 });
+
+async function storedKeys(): Promise<string[]> {
+  const listed = await server.deps.storage.client.send(new ListObjectsV2Command({ Bucket: server.deps.storage.bucket, Prefix: 'attachments/' }));
+  return (listed.Contents ?? []).map((o) => o.Key!);
+}
