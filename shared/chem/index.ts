@@ -6,7 +6,6 @@ import { averageMass, hillFormula, monoisotopicMass } from './formula/formula';
 import { nameGraph, type Naming } from './assembly/molecule';
 import type { NameStyle } from './assembly/style';
 import { loadChemistry, parseInput, type ChemInput } from './parsing/openchemlib';
-import { stereoGate } from './assembly/stereo-gate';
 
 export { ChemInputError } from './parsing/errors';
 export type { ChemInputErrorCode } from './parsing/errors';
@@ -31,7 +30,6 @@ export async function describe(input: ChemInput, options?: { style?: NameStyle }
 export function describeSync(input: ChemInput, options?: { style?: NameStyle }): Description {
   const { graph, canonical, smiles } = parseInput(input);
   const style = options?.style ?? 'preferred';
-  const refusal = stereoGate(graph);
   let canonicalText: string | undefined;
   let smilesText: string | undefined;
   // canonical and smiles cost more than naming itself; they are computed when first read.
@@ -45,6 +43,6 @@ export function describeSync(input: ChemInput, options?: { style?: NameStyle }):
     get smiles() {
       return (smilesText ??= smiles());
     },
-    naming: refusal ? { ok: false, reason: refusal } : nameGraph(graph, style),
+    naming: nameGraph(graph, style),
   };
 }

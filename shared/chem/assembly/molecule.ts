@@ -10,6 +10,7 @@ import { NamingRefusal } from './refusal';
 import type { NameStyle } from './style';
 import { parentPart, renderUnit } from './unit';
 import { checkScope } from './scope';
+import { compareDescriptorSequences, hasStereoMarks, placeDescriptors } from './stereo-descriptors';
 
 export interface Explanation {
   parent: { kind: 'chain' | 'ring' | 'benzene'; name: string; atoms: number[] };
@@ -38,8 +39,15 @@ function nameOrRefuse(graph: MolGraph, style: NameStyle): Naming {
   }
   const ctx: NamingContext = { graph, style, rings, groups: findPrefixGroups(graph), substituents: new Map() };
   const candidates = parentCandidates(ctx).map((s) => evaluate(ctx, s, null));
-  const { item, name } = firstByName(bestCandidates(candidates), (e) => renderUnit(ctx, e));
-  return { ok: true, name, explanation: explain(item) };
+  const survivors = bestCandidates(candidates);
+  const { name } = firstByName(survivors, (e) => renderUnit(ctx, e));
+  const tied = survivors.filter((e) => renderUnit(ctx, e) === name);
+  if (!hasStereoMarks(graph)) return { ok: true, name, explanation: explain(tied[0]) };
+  // Numberings that give the same name may still place descriptors differently.
+  const placed = tied.map((e) => ({ e, descriptors: placeDescriptors(graph, e) }));
+  placed.sort((x, y) => compareDescriptorSequences(x.descriptors.ranked, y.descriptors.ranked));
+  const chosen = placed[0];
+  return { ok: true, name: chosen.descriptors.prefix + name, explanation: explain(chosen.e) };
 }
 
 /**
