@@ -4,6 +4,7 @@ import type { Browser } from 'playwright-core';
 import { signedIn } from '../support/api';
 import { launchBrowser, signIn } from '../support/browser';
 import { startServer, type TestServer } from '../support/server';
+import { uploadFiles } from '../support/uploads';
 
 // Uploads a spectrum through the page's file panel in real headless Chromium against the real
 // server (built client from dist/client: run `npx vite build` first) and looks at the plot.
@@ -150,6 +151,55 @@ describe('spectrum upload in the browser', () => {
     await panel.dispatchEvent('drop', { dataTransfer });
     const item = panel.getByTestId('attachment-item').filter({ hasText: 'dropped proton.csv' });
     await item.getByTestId('spectrum-thumbnail').waitFor();
+    await context.close();
+  });
+});
+
+describe('a spectrum inside the page text', () => {
+  it('shows a spectrum linked to a structure block side by side with that structure', async () => {
+    const chemist = await signedIn(server.url, 'chemist@saltmarsh.test');
+    const notebooks = await chemist.get('/api/notebooks');
+    const notebook = notebooks.body.find((n: { title: string }) => n.title === 'Fruity esters from short-chain acids');
+    const textPage = (await chemist.post(`/api/notebooks/${notebook.id}/pages`, { title: 'Spectrum beside its structure' })).body.id;
+    const uploaded = await uploadFiles(chemist, textPage, [{ name: 'ester IR.jdx', content: Buffer.from(infraredFile()) }]);
+    expect(uploaded.status).toBe(201);
+
+    const context = await browser.newContext({ viewport: { width: 1280, height: 1000 } });
+    const page = await context.newPage();
+    await signIn(page, server.url, 'chemist@saltmarsh.test', 'quillane-demo');
+    await page.goto(`${server.url}/pages/${textPage}`);
+    await page.locator('[data-testid="connection-state"][data-phase="live"]').waitFor({ timeout: 20_000 });
+
+    // The page editor's own menus: a structure from SMILES (isoamyl acetate), then the file, linked to it.
+    const toolbar = page.getByRole('toolbar', { name: 'Formatting' });
+    const blockMenu = toolbar.getByRole('button', { name: /Body text|heading|list|steps|Checklist|note/ });
+    await blockMenu.click();
+    await page.getByRole('menuitem', { name: /Structure from text or file/ }).click();
+    const dialog = page.getByRole('dialog', { name: 'Add a structure' });
+    await dialog.getByLabel('SMILES or molfile').fill('CC(C)CCOC(C)=O');
+    await dialog.getByLabel(/Label/).fill('compound 3');
+    await dialog.getByRole('button', { name: 'Add to page' }).click();
+    await page.getByTestId('structure-block').first().waitFor({ timeout: 20_000 });
+
+    await blockMenu.click();
+    await page.getByRole('menuitem', { name: /Attached file/ }).click();
+    const picker = page.getByRole('dialog', { name: 'Show an attached file in the text' });
+    await picker.getByRole('combobox').selectOption({ label: 'compound 3' });
+    await picker.getByRole('button', { name: /ester IR\.jdx/ }).click();
+
+    const embed = page.getByTestId('attachment-embed');
+    const structure = embed.getByTestId('linked-structure');
+    const plot = embed.getByTestId('spectrum-plot');
+    await plot.locator('canvas').waitFor({ timeout: 20_000 });
+    await structure.locator('svg').waitFor({ timeout: 20_000 });
+    await expect(structure.textContent()).resolves.toContain('Spectrum of compound 3');
+    const structureBox = (await structure.boundingBox())!;
+    const plotBox = (await plot.boundingBox())!;
+    // Side by side: the structure to the left of the plot, on the same band of the page.
+    expect(structureBox.x + structureBox.width).toBeLessThanOrEqual(plotBox.x);
+    expect(structureBox.y).toBeLessThan(plotBox.y + plotBox.height);
+    expect(plotBox.y).toBeLessThan(structureBox.y + structureBox.height);
+    await page.screenshot({ path: '/tmp/spectrum-linked.png', fullPage: true });
     await context.close();
   });
 });
