@@ -168,7 +168,8 @@ export function attachmentRoutes(deps: AppDeps): Router {
       throw new HttpError(404, 'not_a_spectrum', row.parseError ? `This file could not be read as a spectrum: ${row.parseError}` : 'This file is not a spectrum');
     }
     const [stored] = await db.select({ spectrum: attachments.spectrum }).from(attachments).where(eq(attachments.id, row.id));
-    const { preview: _preview, ...spectrum } = stored.spectrum!;
+    if (!stored?.spectrum) throw notFound('Attachment');
+    const { preview: _preview, ...spectrum } = stored.spectrum;
     res.setHeader('Cache-Control', 'private, max-age=3600');
     res.json(spectrum satisfies SpectrumData);
   });

@@ -155,6 +155,30 @@ describe('spectrum upload in the browser', () => {
   });
 });
 
+describe('upload limit in the browser', () => {
+  it('tells the chemist plainly when a file is over the limit and keeps nothing', async () => {
+    const small = await startServer({ UPLOAD_MAX_BYTES: String(1024 * 1024) });
+    const context = await browser.newContext();
+    try {
+      const page = await context.newPage();
+      await signIn(page, small.url, 'chemist@saltmarsh.test', 'quillane-demo');
+      await page.goto(`${small.url}/pages/${pageId}`);
+      const panel = page.getByRole('region', { name: 'Attached files' });
+      await panel.getByTestId('attachment-input').setInputFiles([{ name: 'too big.bin', mimeType: 'application/octet-stream', buffer: Buffer.alloc(3 * 1024 * 1024, 1) }]);
+      const failed = panel.getByRole('listitem').filter({ hasText: 'too big.bin' });
+      await expect(failed.getByRole('alert').textContent()).resolves.toContain('Files larger than 1 MB cannot be uploaded');
+      const chemist = await signedIn(small.url, 'chemist@saltmarsh.test');
+      const list = await chemist.get(`/api/pages/${pageId}/attachments`);
+      expect(list.body.map((a: { displayName: string }) => a.displayName)).not.toContain('too big.bin');
+      await failed.getByRole('button', { name: 'Dismiss' }).click();
+      await failed.waitFor({ state: 'detached' });
+    } finally {
+      await context.close();
+      await small.close();
+    }
+  });
+});
+
 describe('a spectrum inside the page text', () => {
   it('shows a spectrum linked to a structure block side by side with that structure', async () => {
     const chemist = await signedIn(server.url, 'chemist@saltmarsh.test');
