@@ -13,6 +13,11 @@ export interface Detection {
   spectrum: SpectrumCandidate | null;
 }
 
+/** Cheap early guess from the first bytes, so binary files are never held in memory for parsing. */
+export function couldBeSpectrum(start: Buffer, fileName: string): boolean {
+  return JCAMP_EXTENSIONS.test(fileName) || !start.subarray(0, 4096).includes(0);
+}
+
 function looksLikeText(head: Buffer): boolean {
   if (head.includes(0)) return false;
   // A multi-byte character may be cut at the end of the sample; judge the rest.

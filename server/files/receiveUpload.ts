@@ -7,7 +7,7 @@ import type { StoredSpectrum } from '../db/schema';
 import { HttpError } from '../http/errors';
 import type { Storage } from '../storage/s3';
 import { displayNameFor, recordedOriginalName } from './displayName';
-import { detectMediaType, SNIFF_BYTES } from './mediaType';
+import { couldBeSpectrum, detectMediaType, SNIFF_BYTES } from './mediaType';
 import { readSpectrum } from './spectrum';
 import { removeObject, storageKeyFor } from './storage';
 
@@ -96,6 +96,7 @@ export function receiveFiles(req: Request, storage: Storage, limit: number): Pro
       }
       const id = randomUUID();
       const storageKey = storageKeyFor(id);
+      const originalName = recordedOriginalName(info.filename ?? '');
       keys.push(storageKey);
       const hash = createHash('sha256');
       const headChunks: Buffer[] = [];
@@ -115,7 +116,9 @@ export function receiveFiles(req: Request, storage: Storage, limit: number): Pro
             headChunks.push(chunk.subarray(0, SNIFF_BYTES - headBytes));
             headBytes += Math.min(chunk.length, SNIFF_BYTES - headBytes);
           }
-          if (kept) kept = size <= SPECTRUM_TEXT_MAX ? [...kept, chunk] : null;
+          if (kept && size === chunk.length && !couldBeSpectrum(chunk, originalName)) kept = null;
+          if (kept && size > SPECTRUM_TEXT_MAX) kept = null;
+          kept?.push(chunk);
           callback(null, chunk);
         },
       });
@@ -132,7 +135,6 @@ export function receiveFiles(req: Request, storage: Storage, limit: number): Pro
         leavePartsOnError: false,
       });
       uploads.push(upload);
-      const originalName = recordedOriginalName(info.filename ?? '');
       const stored = upload.done().then(() =>
         describeReceived(
           { id, storageKey, originalName, displayName: displayNameFor(originalName), size, sha256: hash.digest('hex') },
