@@ -1,8 +1,10 @@
 import { ListObjectsV2Command } from '@aws-sdk/client-s3';
 import { and, eq } from 'drizzle-orm';
 import { createHash } from 'node:crypto';
+import http from 'node:http';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { attachments, auditEvents, pages } from '../../server/db/schema';
+import { pageAttachmentChecksums } from '../../server/files/checksums';
 import { ApiClient, signedIn } from '../support/api';
 import { startServer, type TestServer } from '../support/server';
 import { generatedBytes, uploadFiles } from '../support/uploads';
@@ -132,6 +134,20 @@ describe('upload and download', () => {
     expect(sha256(fetched.bytes)).toBe(digest);
   });
 
+  it('lists a page\'s checksums for signing in upload order (pageAttachmentChecksums)', async () => {
+    const own = await newPage(chemist, notebookId, 'Checksums for signing');
+    const first = Buffer.from('first file');
+    const second = Buffer.from('second file');
+    const a = await uploadFiles(chemist, own, [{ name: 'b-first.txt', content: first }, { name: 'a-second.txt', content: second }]);
+    const b = await uploadFiles(chemist, own, [{ name: 'third.txt', content: Buffer.from('3') }]);
+    const listed = await pageAttachmentChecksums(server.deps.db, own);
+    expect(listed).toEqual([
+      { id: a.body[0].id, name: 'b-first.txt', sha256: sha256(first), size: first.length },
+      { id: a.body[1].id, name: 'a-second.txt', sha256: sha256(second), size: second.length },
+      { id: b.body[0].id, name: 'third.txt', sha256: sha256(Buffer.from('3')), size: 1 },
+    ]);
+  });
+
   it('records attachment.added in the audit trail', async () => {
     const response = await uploadFiles(chemist, pageId, [{ name: 'audit-me.txt', content: Buffer.from('audit') }]);
     const events = await server.deps.db
@@ -162,6 +178,28 @@ describe('size limit', () => {
     expect(response.status).toBe(413);
     expect(response.body.error.code).toBe('too_large');
     expect(await storedKeys()).toEqual(before);
+  });
+
+  it('answers 413 without waiting for the body when the declared length is over', async () => {
+    // Declares 500 MB but sends only a few bytes: an answer can only come before the body is read.
+    const status = await new Promise<number>((resolve, reject) => {
+      const request = http.request(`${small.url}/api/pages/${pageId}/attachments`, {
+        method: 'POST',
+        headers: {
+          origin: small.url,
+          cookie: client.sessionCookie,
+          'content-type': 'multipart/form-data; boundary=x',
+          'content-length': String(500 * 1024 * 1024),
+        },
+      });
+      request.on('response', (response) => {
+        resolve(response.statusCode ?? 0);
+        request.destroy();
+      });
+      request.on('error', reject);
+      request.write('--x\r\nContent-Disposition: form-data; name="files"; filename="huge.bin"\r\n\r\n');
+    });
+    expect(status).toBe(413);
   });
 
   it('aborts a streamed upload that goes over, deletes what was stored and keeps nothing', async () => {
