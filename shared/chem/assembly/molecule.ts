@@ -11,6 +11,7 @@ import type { NameStyle } from './style';
 import { parentPart, renderUnit } from './unit';
 import { checkScope } from './scope';
 import { compareDescriptorSequences, hasStereoMarks, placeDescriptors } from './stereo-descriptors';
+import { retainedBenzeneName } from './retained-benzenes';
 
 export interface Explanation {
   parent: { kind: 'chain' | 'ring' | 'benzene'; name: string; atoms: number[] };
@@ -42,6 +43,8 @@ function nameOrRefuse(graph: MolGraph, style: NameStyle): Naming {
   const survivors = bestCandidates(candidates);
   const { name } = firstByName(survivors, (e) => renderUnit(ctx, e));
   const tied = survivors.filter((e) => renderUnit(ctx, e) === name);
+  const retained = retainedBenzeneName(tied[0], style);
+  if (retained) return { ok: true, name: retained, explanation: explainRetained(tied[0], retained) };
   if (!hasStereoMarks(graph)) return { ok: true, name, explanation: explain(tied[0]) };
   // Numberings that give the same name may still place descriptors differently.
   const placed = tied.map((e) => ({ e, descriptors: placeDescriptors(graph, e) }));
@@ -82,6 +85,12 @@ function evaluateMultipleBonds(ctx: NamingContext, skeleton: Skeleton): number {
     if (ctx.graph.bonds[edge.bond].order > 1) count += 1;
   }
   return count;
+}
+
+/** A retained name (toluene, xylene…) covers its alkyl groups: they belong to the parent. */
+function explainRetained(e: Evaluated, name: string): Explanation {
+  const atoms = [...e.skeleton.atoms, ...e.prefixes.flatMap((p) => p.substituent.atoms)];
+  return { parent: { kind: e.skeleton.kind, name, atoms }, substituents: [] };
 }
 
 function explain(e: Evaluated): Explanation {
