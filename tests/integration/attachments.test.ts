@@ -78,6 +78,11 @@ describe('upload and download', () => {
       expect(fetched.status).toBe(200);
       expect(sha256(fetched.bytes)).toBe(sha256(bytes));
       expect(fetched.headers.get('content-disposition')).toContain(`filename="${meta.displayName}"`);
+      // The checksum doubles as the validator (RFC 9110, 8.8.3 and 13.1.2): unchanged bytes are not sent again.
+      const again = await fetch(`${chemist.baseUrl}/api/attachments/${meta.id}/content`, {
+        headers: { cookie: chemist.sessionCookie, 'if-none-match': fetched.headers.get('etag')! },
+      });
+      expect(again.status).toBe(304);
     }
 
     const list = await chemist.get(`/api/pages/${pageId}/attachments`);

@@ -45,8 +45,13 @@ export function useUploadQueue(pageId: string) {
             void client.invalidateQueries({ queryKey: attachmentKeys.ofPage(pageId) });
           },
           (error: ApiError) => {
-            if (error.code === 'cancelled') drop(key);
-            else update(key, { state: 'failed', error: error.message });
+            if (error.code === 'cancelled') {
+              drop(key);
+              // A cancel that comes after the server had every byte still leaves the file stored: show what is there.
+              void client.invalidateQueries({ queryKey: attachmentKeys.ofPage(pageId) });
+            } else {
+              update(key, { state: 'failed', error: error.message });
+            }
             cancels.current.delete(key);
           },
         );
