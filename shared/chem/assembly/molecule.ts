@@ -1,14 +1,16 @@
 import type { MolGraph } from '../graph/types';
-import { findRingSystems } from '../graph/rings';
+import { findRingSystems, type RingSystems } from '../graph/rings';
 import { findPrefixGroups } from '../groups/scope';
-import { longestParentChains } from '../chain/paths';
+import { chainTrees, longestParentChains, principalChains } from '../chain/paths';
+import { findPrincipalGroups } from '../groups/principal';
 import type { NamingContext, Skeleton } from '../numbering/context';
 import { evaluate, type Evaluated } from '../numbering/evaluate';
 import { bestCandidates, firstByName } from '../numbering/select';
-import { isMancudeNonBenzene, ringNumberings } from '../rings/numberings';
+import { isBenzene, isMancudeNonBenzene, ringNumberings } from '../rings/numberings';
 import { NamingRefusal } from './refusal';
 import type { NameStyle } from './style';
 import { parentPart, renderUnit } from './unit';
+import { suffixWord } from './suffixes';
 import { checkScope } from './scope';
 import { compareDescriptorSequences, hasStereoMarks, placeDescriptors } from './stereo-descriptors';
 import { retainedBenzeneName } from './retained-benzenes';
@@ -38,43 +40,71 @@ function nameOrRefuse(graph: MolGraph, style: NameStyle): Naming {
     if (system.atoms.some((a) => graph.atoms[a].element !== 'C')) throw new NamingRefusal('heterocycles are not named yet');
     if (isMancudeNonBenzene(graph, system.atoms)) throw new NamingRefusal('fully conjugated rings other than benzene (annulenes) are not named yet');
   }
-  const ctx: NamingContext = { graph, style, rings, groups: findPrefixGroups(graph), substituents: new Map() };
+  refuseRingAssemblies(graph, rings);
+  const groups = findPrefixGroups(graph);
+  const ctx: NamingContext = { graph, style, rings, groups, principal: findPrincipalGroups(graph, groups), substituents: new Map() };
   const candidates = parentCandidates(ctx).map((s) => evaluate(ctx, s, null));
   const survivors = bestCandidates(candidates);
   const { name } = firstByName(survivors, (e) => renderUnit(ctx, e));
   const tied = survivors.filter((e) => renderUnit(ctx, e) === name);
   const retained = retainedBenzeneName(tied[0], style);
   if (retained) return { ok: true, name: retained, explanation: explainRetained(tied[0], retained) };
-  if (!hasStereoMarks(graph)) return { ok: true, name, explanation: explain(tied[0]) };
+  if (!hasStereoMarks(graph)) return { ok: true, name, explanation: explain(ctx, tied[0]) };
   // Numberings that give the same name may still place descriptors differently.
   const placed = tied.map((e) => ({ e, descriptors: placeDescriptors(graph, e) }));
   placed.sort((x, y) => compareDescriptorSequences(x.descriptors.ranked, y.descriptors.ranked));
   const chosen = placed[0];
-  return { ok: true, name: chosen.descriptors.prefix + name, explanation: explain(chosen.e) };
+  return { ok: true, name: chosen.descriptors.prefix + name, explanation: explain(ctx, chosen.e) };
 }
 
 /**
- * P-44.1.2.2 (2013): a ring is senior to a chain, so any ring makes the parent a ring. Among
- * monocycles, the larger ring (P-44.2.1.2.5), then the one with more multiple bonds
- * (P-44.4.1.1). Two rings that still tie would call for multiplicative or ring-assembly names
- * (P-15.3, P-28), which are not built yet.
+ * Candidate parents in the order of the 2013 rules: the greatest number of principal
+ * characteristic groups (P-44.1.1); then a ring is senior to a chain (P-44.1.2.2); among
+ * monocycles, the larger ring (P-44.2.1.2.5), then the one with more multiple bonds (P-44.4.1.1).
+ * Two rings that still tie would call for multiplicative or ring-assembly names (P-15.3, P-28),
+ * which are not built yet. Chains (of every acyclic carbon tree) are left to the numbering criteria.
  */
 function parentCandidates(ctx: NamingContext): Skeleton[] {
   const { graph, rings } = ctx;
-  if (rings.systems.length === 0) {
-    const firstCarbon = graph.atoms.findIndex((a) => a.element === 'C');
-    return longestParentChains(ctx, firstCarbon).map((atoms) => ({ kind: 'chain', atoms }));
-  }
+  const weight = (atom: number) => ctx.principal.filter((g) => g.carbon === atom).length;
+  const onRing = (atoms: Set<number>) =>
+    ctx.principal.filter((g) => atoms.has(g.carbon) || (g.kind === 'al' && graph.adjacency[g.carbon].some((e) => atoms.has(e.atom)))).length;
   const ranked = rings.systems.map((system) => {
     const numberings = ringNumberings(graph, system.atoms, null);
     const multiple = numberings[0].kind === 'benzene' ? system.atoms.length / 2 : evaluateMultipleBonds(ctx, numberings[0]);
-    return { numberings, size: system.atoms.length, multiple };
+    return { numberings, size: system.atoms.length, multiple, groups: onRing(new Set(system.atoms)) };
   });
-  ranked.sort((a, b) => b.size - a.size || b.multiple - a.multiple);
-  if (ranked.length > 1 && ranked[1].size === ranked[0].size && ranked[1].multiple === ranked[0].multiple) {
+  const chains = chainTrees(ctx).flatMap((start) =>
+    (ctx.principal.length ? principalChains(ctx, start, weight) : longestParentChains(ctx, start)).map((atoms) => ({
+      atoms,
+      groups: atoms.reduce((sum, a) => sum + weight(a), 0),
+    })),
+  );
+  const most = Math.max(...ranked.map((r) => r.groups), ...chains.map((c) => c.groups));
+  const senior = ranked.filter((r) => r.groups === most);
+  if (senior.length === 0) return chains.filter((c) => c.groups === most).map((c) => ({ kind: 'chain', atoms: c.atoms }));
+  senior.sort((a, b) => b.size - a.size || b.multiple - a.multiple);
+  if (senior.length > 1 && senior[1].size === senior[0].size && senior[1].multiple === senior[0].multiple) {
     throw new NamingRefusal('two or more equally senior rings: multiplicative and ring-assembly names (P-15.3, P-28) are not built yet');
   }
-  return ranked[0].numberings;
+  return senior[0].numberings;
+}
+
+/**
+ * P-28: two identical rings joined directly form a ring assembly (biphenyl, 1,1'-bi(cyclohexane)),
+ * a parent hydride of its own, also where a characteristic group would otherwise pick one ring as
+ * the parent ([1,1'-biphenyl]-4-ol). Rings of equal size joined directly are refused unless exactly
+ * one of them is benzene (cyclohexylbenzene).
+ */
+function refuseRingAssemblies(graph: MolGraph, rings: RingSystems): void {
+  for (const bond of graph.bonds) {
+    const [a, b] = [rings.systemOf[bond.from], rings.systemOf[bond.to]];
+    if (a < 0 || b < 0 || a === b) continue;
+    const [x, y] = [rings.systems[a].atoms, rings.systems[b].atoms];
+    if (x.length === y.length && isBenzene(graph, x) === isBenzene(graph, y)) {
+      throw new NamingRefusal('two identical rings joined directly form a ring assembly (biphenyl, bi(cyclohexane), P-28), which is not named yet');
+    }
+  }
 }
 
 function evaluateMultipleBonds(ctx: NamingContext, skeleton: Skeleton): number {
@@ -93,11 +123,21 @@ function explainRetained(e: Evaluated, name: string): Explanation {
   return { parent: { kind: e.skeleton.kind, name, atoms }, substituents: [] };
 }
 
-function explain(e: Evaluated): Explanation {
-  return {
-    parent: { kind: e.skeleton.kind, name: parentPart(e), atoms: [...e.skeleton.atoms] },
+function explain(ctx: NamingContext, e: Evaluated): Explanation {
+  const explanation: Explanation = {
+    parent: { kind: e.skeleton.kind, name: parentPart(e, ctx), atoms: [...e.skeleton.atoms] },
     substituents: e.prefixes
       .map((p) => ({ locant: String(p.locant), name: p.substituent.name, atoms: p.substituent.atoms }))
       .sort((a, b) => Number(a.locant) - Number(b.locant)),
   };
+  if (e.principal.length) {
+    explanation.principalGroups = e.principal
+      .map(({ locant, group }) => ({
+        locant: String(locant),
+        suffix: suffixWord(group.kind, e.skeleton.kind),
+        atoms: group.kind === 'al' ? [group.carbon, group.oxygen] : [group.oxygen],
+      }))
+      .sort((a, b) => Number(a.locant) - Number(b.locant));
+  }
+  return explanation;
 }

@@ -3,6 +3,7 @@ import type { Evaluated } from '../numbering/evaluate';
 import { hydrideName, type FreeValenceKind } from './hydride';
 import { citePrefixes, joinPrefixes } from './prefixes';
 import { NamingRefusal } from './refusal';
+import { principalLocantsOmitted, retainedPrincipalParent, withSuffix } from './suffixes';
 
 const FREE_VALENCE: Record<1 | 2 | 3, FreeValenceKind> = { 1: 'yl', 2: 'ylidene', 3: 'ylidyne' };
 
@@ -14,6 +15,8 @@ const FREE_VALENCE: Record<1 | 2 | 3, FreeValenceKind> = { 1: 'yl', 2: 'ylidene'
 function omitPrefixLocants(e: Evaluated): boolean {
   const size = e.skeleton.atoms.length;
   if (size === 1) return true;
+  // Substituted acetaldehydes (traditional style): every prefix sits on C-2.
+  if (e.principal.length) return principalLocantsOmitted(e) || (e.skeleton.kind === 'chain' && size === 2 && e.principal[0].group.kind === 'al');
   if (e.attachment) return false;
   if (e.prefixes.length !== 1) return false;
   if (e.skeleton.kind === 'chain') return size === 2;
@@ -22,14 +25,23 @@ function omitPrefixLocants(e: Evaluated): boolean {
 
 /** Name of a parent (no attachment) or a substituent group (with attachment), from its evaluation. */
 export function renderUnit(ctx: NamingContext, e: Evaluated): string {
-  void ctx;
-  return joinPrefixes(citePrefixes(e.prefixes, omitPrefixLocants(e))) + parentPart(e);
+  return joinPrefixes(citePrefixes(e.prefixes, omitPrefixLocants(e))) + parentPart(e, ctx);
 }
 
 /** The parent hydride's own name with unsaturation and free-valence endings, without prefixes. */
-export function parentPart(e: Evaluated): string {
+export function parentPart(e: Evaluated, ctx: NamingContext): string {
   if (e.closesRing) throw new NamingRefusal('a ring numbering that puts a multiple bond between the last and first ring atoms is not handled yet');
   const size = e.skeleton.atoms.length;
+  if (e.principal.length) {
+    if (e.principal[0].group.kind === 'al' && e.skeleton.kind === 'chain' && e.prefixes.some((p) => p.substituent.name === 'formyl')) {
+      throw new NamingRefusal('more than two CHO groups on one chain: alkanetricarbaldehyde names (P-66.6.1.1.3) are not built yet');
+    }
+    const retained = retainedPrincipalParent(e, ctx.style);
+    if (retained) return retained;
+    const cite = !principalLocantsOmitted(e);
+    const hydride = e.skeleton.kind === 'benzene' ? 'benzene' : hydrideName({ size, ring: e.skeleton.kind === 'ring', multiple: e.multiple, freeValence: null, citeMultipleBondLocants: cite });
+    return withSuffix(e, hydride, cite);
+  }
   const fv = e.attachment ? { locant: e.freeValence[0], kind: FREE_VALENCE[e.attachment.order] } : null;
   let parent: string;
   if (e.skeleton.kind === 'benzene') {

@@ -93,3 +93,60 @@ function leafPaths(ctx: NamingContext, first: number, from: number): number[][] 
   const best = Math.max(...result.map((p) => p.length));
   return result.filter((p) => p.length === best);
 }
+
+/**
+ * Chains of the acyclic carbon tree containing `start` with the greatest number of principal
+ * characteristic groups (P-44.1.1) and, among those, the greatest length (P-44.3), in both
+ * directions. `weight` counts the principal groups each atom carries. Such chains always run leaf
+ * to leaf, because lengthening a chain never loses a group.
+ */
+export function principalChains(ctx: NamingContext, start: number, weight: (atom: number) => number): number[][] {
+  const tree: number[] = [];
+  const seen = new Set<number>([start]);
+  for (let i = 0, queue = [start]; i < queue.length; i++) {
+    tree.push(queue[i]);
+    for (const next of chainNeighbours(ctx, queue[i], -1)) if (!seen.has(next)) (seen.add(next), queue.push(next));
+  }
+  const leaves = tree.filter((a) => chainNeighbours(ctx, a, -1).length <= 1);
+  let best = { groups: -1, length: 0 };
+  let paths: number[][] = [];
+  for (const leaf of leaves) {
+    const parent = new Map<number, number>([[leaf, -1]]);
+    const depth = new Map<number, number>([[leaf, 1]]);
+    const groups = new Map<number, number>([[leaf, weight(leaf)]]);
+    for (let i = 0, queue = [leaf]; i < queue.length; i++) {
+      for (const next of chainNeighbours(ctx, queue[i], -1)) {
+        if (parent.has(next)) continue;
+        parent.set(next, queue[i]);
+        depth.set(next, depth.get(queue[i])! + 1);
+        groups.set(next, groups.get(queue[i])! + weight(next));
+        queue.push(next);
+      }
+    }
+    for (const other of leaves) {
+      const score = { groups: groups.get(other)!, length: depth.get(other)! };
+      const order = score.groups - best.groups || score.length - best.length;
+      if (order < 0) continue;
+      if (order > 0) (best = score), (paths = []);
+      const path: number[] = [];
+      for (let a = other; a !== -1; a = parent.get(a)!) path.push(a);
+      paths.push(path);
+    }
+  }
+  return paths;
+}
+
+/** One atom of every acyclic carbon tree (chains cannot cross rings or heteroatoms). */
+export function chainTrees(ctx: NamingContext): number[] {
+  const starts: number[] = [];
+  const seen = new Set<number>();
+  for (let atom = 0; atom < ctx.graph.atoms.length; atom++) {
+    if (seen.has(atom) || !isChainCarbon(ctx, atom)) continue;
+    starts.push(atom);
+    for (let i = 0, queue = [atom]; i < queue.length; i++) {
+      seen.add(queue[i]);
+      for (const next of chainNeighbours(ctx, queue[i], -1)) if (!seen.has(next)) (seen.add(next), queue.push(next));
+    }
+  }
+  return starts;
+}

@@ -1,9 +1,14 @@
 import type { MolGraph } from '../graph/types';
 import { NamingRefusal } from '../assembly/refusal';
 
-export type PrefixGroupKind = 'fluoro' | 'chloro' | 'bromo' | 'iodo' | 'nitro';
+export type PrefixGroupKind = 'fluoro' | 'chloro' | 'bromo' | 'iodo' | 'nitro' | 'hydroxy' | 'oxo' | 'ether';
 
-/** A characteristic group cited only as a prefix (P-61.3 halogen compounds, P-61.5 nitro). */
+/**
+ * A non-carbon group hanging from a carbon atom, as the engine cites it when it is not the
+ * principal characteristic group: halogen (P-61.3), nitro (P-61.5), hydroxy (P-63.1.3), oxo
+ * (P-64.1.2) prefixes; 'ether' marks a bridging oxygen named as an alkoxy or aryloxy prefix
+ * (P-63.2.2.2) from either side.
+ */
 export interface PrefixGroup {
   kind: PrefixGroupKind;
   /** The group's atom bonded to the skeleton carbon. */
@@ -36,6 +41,12 @@ export function findPrefixGroups(graph: MolGraph): Map<number, PrefixGroup> {
       continue;
     }
     if (atom.element === 'O' && neighbours.length === 1 && graph.atoms[neighbours[0].atom].element === 'N' && nitroGroup(graph, neighbours[0].atom)) continue;
+    const oxygen = oxygenGroup(graph, atom.index);
+    if (oxygen) {
+      groups.set(atom.index, oxygen);
+      claimed.add(atom.index);
+      continue;
+    }
     throw new NamingRefusal(describeUnhandled(graph, atom.index));
   }
   return groups;
@@ -58,11 +69,50 @@ function nitroGroup(graph: MolGraph, n: number): PrefixGroup | null {
   return { kind: 'nitro', atom: n, atoms: [n, ...oxygens.map((e) => e.atom)] };
 }
 
+/** True when carbon `c` carries a doubly bonded oxygen. */
+export function isCarbonyl(graph: MolGraph, c: number): boolean {
+  return graph.adjacency[c].some((e) => graph.atoms[e.atom].element === 'O' && graph.bonds[e.bond].order === 2);
+}
+
+/**
+ * Neutral oxygen on carbon: C-OH (hydroxy), C=O on a carbon whose other neighbours are carbon or
+ * hydrogen only (ketone or aldehyde: oxo), C-O-C (ether). Oxygen on a carbonyl carbon belongs to
+ * an acid, ester or anhydride, which are refused by name here rather than taken apart.
+ */
+function oxygenGroup(graph: MolGraph, o: number): PrefixGroup | null {
+  const atom = graph.atoms[o];
+  const neighbours = graph.adjacency[o];
+  if (atom.element !== 'O' || atom.charge !== 0 || neighbours.some((e) => graph.atoms[e.atom].element !== 'C')) return null;
+  const carbons = neighbours.map((e) => e.atom);
+  const where = `the O atom ${o + 1}`;
+  if (neighbours.length === 1 && graph.bonds[neighbours[0].bond].order === 2) {
+    const c = carbons[0];
+    const others = graph.adjacency[c].filter((e) => e.atom !== o);
+    if (others.some((e) => graph.atoms[e.atom].element !== 'C')) throw new NamingRefusal(carbonylRefusal(graph, c, where));
+    if (graph.atoms[c].hydrogens === 0 && others.length < 2) throw new NamingRefusal(`${where} belongs to a ketene (C=C=O), which is not named yet`);
+    return { kind: 'oxo', atom: o, atoms: [o] };
+  }
+  if (neighbours.some((e) => graph.bonds[e.bond].order !== 1)) return null;
+  if (carbons.some((c) => isCarbonyl(graph, c))) throw new NamingRefusal(carbonylRefusal(graph, carbons.find((c) => isCarbonyl(graph, c))!, where));
+  if (neighbours.length === 1 && atom.hydrogens === 1) return { kind: 'hydroxy', atom: o, atoms: [o] };
+  if (neighbours.length === 2 && atom.hydrogens === 0) return { kind: 'ether', atom: o, atoms: [o] };
+  return null;
+}
+
+function carbonylRefusal(graph: MolGraph, c: number, where: string): string {
+  const elements = new Set(graph.adjacency[c].map((e) => graph.atoms[e.atom].element));
+  const carbonylOxygens = graph.adjacency[c].filter((e) => graph.atoms[e.atom].element === 'O').length;
+  if (elements.has('N')) return `${where} belongs to an amide or other C(=O)-N group, which is not named yet`;
+  if (['F', 'Cl', 'Br', 'I'].some((x) => elements.has(x))) return `${where} belongs to an acid halide, which is not named yet`;
+  if (carbonylOxygens >= 2) return `${where} belongs to a carboxylic acid, ester, anhydride or carbonate, which is not named yet`;
+  return `${where} belongs to a carbonyl group with a heteroatom on its carbon, which is not named yet`;
+}
+
 function describeUnhandled(graph: MolGraph, index: number): string {
   const atom = graph.atoms[index];
   if (atom.charge !== 0) return `charged atom ${atom.element}${atom.charge > 0 ? '+' : '-'} (atom ${index + 1}): ions are not named yet`;
   if (['N', 'O', 'S', 'P', 'B'].includes(atom.element)) {
-    return `the ${atom.element} atom ${index + 1} belongs to a characteristic group that is not named yet (only halogen and nitro substituents are)`;
+    return `the ${atom.element} atom ${index + 1} belongs to a characteristic group that is not named yet (named: halogen, nitro, alcohols, ketones, aldehydes, ethers)`;
   }
   return `atom ${index + 1} (${atom.element}) is not handled yet`;
 }

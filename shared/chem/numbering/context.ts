@@ -1,6 +1,7 @@
 import type { MolGraph } from '../graph/types';
 import type { RingSystems } from '../graph/rings';
 import type { PrefixGroup } from '../groups/scope';
+import type { PrincipalGroup } from '../groups/principal';
 import type { NameStyle } from '../assembly/style';
 
 /** A named substituent prefix (P-29, P-61), independent of the parent's numbering. */
@@ -12,6 +13,8 @@ export interface SubstituentName {
   /** Needs enclosing marks when cited (compound prefixes and prefixes containing locants). */
   enclose: boolean;
   atoms: number[];
+  /** The group's own parent with its free-valence ending ('ethyl', 'phenyl'), for alkoxy contraction. */
+  hydride?: string;
 }
 
 export interface NamingContext {
@@ -19,6 +22,8 @@ export interface NamingContext {
   style: NameStyle;
   rings: RingSystems;
   groups: Map<number, PrefixGroup>;
+  /** Every occurrence of the principal characteristic group (empty when there is none). */
+  principal: PrincipalGroup[];
   /** Memo of substituent names, keyed by attachment atom and the parent atom it hangs from. */
   substituents: Map<string, SubstituentName>;
 }

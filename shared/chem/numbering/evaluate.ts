@@ -1,5 +1,6 @@
 import { bondBetween } from '../graph/rings';
 import type { Attachment, NamingContext, Prefix, Skeleton } from './context';
+import type { PrincipalGroup } from '../groups/principal';
 import { nameSubstituent } from '../substituents/substituent';
 
 /** What the seniority and numbering rules look at, for one candidate parent in one numbering. */
@@ -10,10 +11,12 @@ export interface Evaluated {
   freeValence: number[];
   multiple: { locant: number; order: 2 | 3 }[];
   prefixes: Prefix[];
+  /** Principal characteristic groups expressed as the parent's suffix (parents only). */
+  principal: { locant: number; group: PrincipalGroup }[];
   /** Set when a multiple bond closes the ring between the last and the first atom. */
   closesRing: boolean;
   /** Sorted locant sets the numbering rules compare, computed once. */
-  keys: { multiple: number[]; double: number[]; prefixes: number[]; citation: number[] | null };
+  keys: { principal: number[]; multiple: number[]; double: number[]; prefixes: number[]; citation: number[] | null };
 }
 
 export function evaluate(ctx: NamingContext, skeleton: Skeleton, attachment: Attachment | null): Evaluated {
@@ -32,20 +35,40 @@ export function evaluate(ctx: NamingContext, skeleton: Skeleton, attachment: Att
     }
   }
   const prefixes: Prefix[] = [];
+  const principal: Evaluated['principal'] = [];
   atoms.forEach((atom, i) => {
     for (const { atom: next } of graph.adjacency[atom]) {
       if (inSkeleton.has(next)) continue;
       if (attachment && atom === attachment.atom && next === attachment.from) continue;
+      const suffix = attachment ? undefined : suffixGroup(ctx, skeleton, atom, next);
+      if (suffix) {
+        principal.push({ locant: i + 1, group: suffix });
+        continue;
+      }
       prefixes.push({ locant: i + 1, substituent: nameSubstituent(ctx, next, atom) });
     }
   });
   const freeValence = attachment ? [atoms.indexOf(attachment.atom) + 1] : [];
   const ascending = (values: number[]) => values.sort((x, y) => x - y);
   const keys = {
+    principal: ascending(principal.map((p) => p.locant)),
     multiple: ascending(multiple.map((m) => m.locant)),
     double: ascending(multiple.filter((m) => m.order === 2).map((m) => m.locant)),
     prefixes: ascending(prefixes.map((p) => p.locant)),
     citation: null,
   };
-  return { skeleton, attachment, freeValence, multiple, prefixes, closesRing, keys };
+  return { skeleton, attachment, freeValence, multiple, prefixes, principal, closesRing, keys };
+}
+
+/**
+ * The principal group reached from skeleton atom `atom` through its neighbour `next`, if any: the
+ * group's oxygen on its own carbon (-ol, -one, and -al when the CHO carbon is in the chain), or,
+ * on rings, the whole CHO group hanging from a ring atom (-carbaldehyde, P-66.6.1.1.2).
+ */
+function suffixGroup(ctx: NamingContext, skeleton: Skeleton, atom: number, next: number): PrincipalGroup | undefined {
+  for (const group of ctx.principal) {
+    if (group.carbon === atom && group.oxygen === next) return group;
+    if (group.kind === 'al' && skeleton.kind !== 'chain' && group.carbon === next) return group;
+  }
+  return undefined;
 }

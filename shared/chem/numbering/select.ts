@@ -22,9 +22,11 @@ function locantsInCitationOrder(e: Evaluated): number[] {
  * The criteria deciding between candidate parents and their numberings, in the order of the
  * 2013 rules. Chain choice and numbering interleave exactly as below, so both are decided by one
  * pass over (chain, direction) candidates:
+ *  P-44.1.1 greater number of principal characteristic groups (rings before chains, P-44.1.2.2, is
+ *  decided before these criteria, when the candidates are gathered);
  *  P-44.3 (b) greater number of skeletal atoms;
  *  P-44.4.1.1 greater number of multiple bonds; P-44.4.1.2 greater number of double bonds;
- *  P-31.1.4.2.4 lowest locants for free valences (principal characteristic groups come here in part 2);
+ *  P-31.1.4.2.4 lowest locants for principal characteristic groups and free valences;
  *  P-31.1.4.2.4 / P-44.4.1.4 lowest locants for multiple bonds together, then for double bonds;
  *  P-45.2.1 greater number of prefixes; P-45.2.2 / P-31.1.4.3 lowest locants for all prefixes;
  *  P-45.2.3 / P-31.1.4.3.4 lowest locants for the prefix cited first in alphanumerical order.
@@ -32,10 +34,12 @@ function locantsInCitationOrder(e: Evaluated): number[] {
  * is applied by the caller.
  */
 const CRITERIA: Comparator[] = [
+  more((e) => e.principal.length),
   more((e) => e.skeleton.atoms.length),
   more((e) => e.multiple.length),
   more((e) => e.keys.double.length),
   lower((e) => e.freeValence),
+  lower((e) => e.keys.principal),
   lower((e) => e.keys.multiple),
   lower((e) => e.keys.double),
   more((e) => e.prefixes.length),

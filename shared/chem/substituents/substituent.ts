@@ -1,6 +1,9 @@
 import { longestSubstituentChains } from '../chain/paths';
 import { NamingRefusal } from '../assembly/refusal';
-import { renderUnit } from '../assembly/unit';
+import { parentPart, renderUnit } from '../assembly/unit';
+import { isCarbonyl } from '../groups/scope';
+import { isAldehydeCarbon } from '../groups/principal';
+import { alkoxy } from './alkoxy';
 import type { Attachment, NamingContext, Skeleton, SubstituentName } from '../numbering/context';
 import { evaluate } from '../numbering/evaluate';
 import { bestCandidates, firstByName } from '../numbering/select';
@@ -26,8 +29,15 @@ export function nameSubstituent(ctx: NamingContext, atom: number, from: number):
 function build(ctx: NamingContext, atom: number, from: number): SubstituentName {
   const { graph } = ctx;
   const group = ctx.groups.get(atom);
+  if (group?.kind === 'ether') return alkoxy(ctx, atom, from, collectAtoms(ctx, atom, from));
   if (group) return { name: group.kind, compound: false, enclose: false, atoms: group.atoms };
   if (graph.atoms[atom].element !== 'C') throw new NamingRefusal(`atom ${atom + 1} (${graph.atoms[atom].element}) cannot be named as a substituent yet`);
+  if (isAldehydeCarbon(graph, atom)) {
+    // P-66.6.1.2: -CHO as a prefix is formyl (its carbon cannot join a chain here: it has no other carbon).
+    if (graph.adjacency[atom].every((e) => e.atom === from || graph.atoms[e.atom].element === 'O')) return { name: 'formyl', compound: false, enclose: false, atoms: collectAtoms(ctx, atom, from) };
+  } else if (isCarbonyl(graph, atom)) {
+    throw new NamingRefusal(`the group attached through the carbonyl carbon atom ${atom + 1} is an acyl group; acyl prefixes (acetyl, benzoyl…, P-65.1.7) are not named yet`);
+  }
   const order = graph.bonds[bondBetween(graph, atom, from)].order;
   const attachment: Attachment = { atom, from, order };
   const system = ctx.rings.systemOf[atom];
@@ -40,7 +50,7 @@ function build(ctx: NamingContext, atom: number, from: number): SubstituentName 
   const retained = retainedPrefix(name, ctx.style);
   const atoms = collectAtoms(ctx, atom, from);
   if (retained) return { name: retained, compound: false, enclose: false, atoms };
-  return { name, compound: item.prefixes.length > 0, enclose: item.prefixes.length > 0 || /\d/.test(name), atoms };
+  return { name, compound: item.prefixes.length > 0, enclose: item.prefixes.length > 0 || /\d/.test(name), atoms, hydride: parentPart(item, ctx) };
 }
 
 function collectAtoms(ctx: NamingContext, atom: number, from: number): number[] {

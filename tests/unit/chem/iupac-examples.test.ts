@@ -169,10 +169,11 @@ describe('explanation output', () => {
 
 describe('refusals instead of wrong names', () => {
   it.each([
-    ['CCO', /not named yet/],
+    ['CC#N', /not named yet/],
     ['C1CCC2CCCCC2C1', /fused, bridged and spiro/],
     ['C1CCNCC1', /heterocycles|not named yet/],
-    ['C1CCCCC1C1CCCCC1', /multiplicative/],
+    ['C1CCCCC1C1CCCCC1', /ring assembly/],
+    ['c1ccccc1Oc1ccccc1', /multiplicative/],
     ['CC.CC', /disconnected/],
     ['C[C@H](CC)C1CCCCC1', /substituent group; descriptors there are not placed yet/],
     ['C/C=C/C1CCCCC1', /not in the parent chain or ring/],
