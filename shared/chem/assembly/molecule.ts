@@ -2,7 +2,7 @@ import type { MolGraph } from '../graph/types';
 import { findRingSystems, type RingSystems } from '../graph/rings';
 import { findPrefixGroups } from '../groups/scope';
 import { chainTrees, longestParentChains, principalChains } from '../chain/paths';
-import { findPrincipalGroups } from '../groups/principal';
+import { findPrincipalGroups, suffixIncludesCarbon } from '../groups/principal';
 import type { NamingContext, Skeleton } from '../numbering/context';
 import { evaluate, type Evaluated } from '../numbering/evaluate';
 import { bestCandidates, firstByName } from '../numbering/select';
@@ -68,7 +68,7 @@ function parentCandidates(ctx: NamingContext): Skeleton[] {
   const { graph, rings } = ctx;
   const weight = (atom: number) => ctx.principal.filter((g) => g.carbon === atom).length;
   const onRing = (atoms: Set<number>) =>
-    ctx.principal.filter((g) => atoms.has(g.carbon) || (g.kind === 'al' && graph.adjacency[g.carbon].some((e) => atoms.has(e.atom)))).length;
+    ctx.principal.filter((g) => atoms.has(g.carbon) || (suffixIncludesCarbon(g.kind) && graph.adjacency[g.carbon].some((e) => atoms.has(e.atom)))).length;
   const ranked = rings.systems.map((system) => {
     const numberings = ringNumberings(graph, system.atoms, null);
     const multiple = numberings[0].kind === 'benzene' ? system.atoms.length / 2 : evaluateMultipleBonds(ctx, numberings[0]);
@@ -135,7 +135,7 @@ function explain(ctx: NamingContext, e: Evaluated): Explanation {
       .map(({ locant, group }) => ({
         locant: String(locant),
         suffix: suffixWord(group.kind, e.skeleton.kind),
-        atoms: group.kind === 'al' ? [group.carbon, group.oxygen] : [group.oxygen],
+        atoms: suffixIncludesCarbon(group.kind) ? [group.carbon, ...group.atoms] : [...group.atoms],
       }))
       .sort((a, b) => Number(a.locant) - Number(b.locant));
   }

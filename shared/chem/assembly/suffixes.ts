@@ -1,4 +1,4 @@
-import type { SuffixKind } from '../groups/principal';
+import { suffixIncludesCarbon, type SuffixKind } from '../groups/principal';
 import type { Skeleton } from '../numbering/context';
 import type { Evaluated } from '../numbering/evaluate';
 import { multiplier } from './numerals';
@@ -7,10 +7,12 @@ import type { NameStyle } from './style';
 
 /**
  * The suffix word of a principal group: -ol (P-63.1.2), -one (P-64.2.1), -al for a CHO carbon
- * inside a chain and -carbaldehyde for a CHO group on a ring (P-66.6.1.1).
+ * inside a chain and -carbaldehyde for a CHO group on a ring (P-66.6.1.1), -oic acid and
+ * -carboxylic acid likewise for COOH (P-65.1.2).
  */
 export function suffixWord(kind: SuffixKind, skeleton: Skeleton['kind']): string {
   if (kind === 'al') return skeleton === 'chain' ? 'al' : 'carbaldehyde';
+  if (kind === 'acid') return skeleton === 'chain' ? 'oic acid' : 'carboxylic acid';
   return kind;
 }
 
@@ -29,29 +31,33 @@ export function principalLocantsOmitted(e: Evaluated): boolean {
 }
 
 /**
- * Retained names with principal groups (P-63.1.1, P-64.2.1.3, P-66.6.1.1.1; written from memory):
- * phenol and benzaldehyde are preferred IUPAC names and take ring substituents (4-chlorophenol);
- * formaldehyde and acetaldehyde are preferred names of the bare compounds (substituted
- * acetaldehydes are named only in the traditional style, e.g. phenylacetaldehyde); acetone is a
- * general name only (the preferred name is propan-2-one).
+ * Retained names with principal groups (P-63.1.1, P-64.2.1.3, P-65.1.1.1, P-66.6.1.1.1; written
+ * from memory): phenol, benzaldehyde and benzoic acid are preferred IUPAC names and take ring
+ * substituents (4-chlorophenol); acetic acid is a preferred name that takes substituents on C-2
+ * (chloroacetic acid, phenylacetic acid); formic acid, oxalic acid, formaldehyde and acetaldehyde
+ * are preferred names of the bare compounds (substituted acetaldehydes are named only in the
+ * traditional style, e.g. phenylacetaldehyde); acetone is a general name only (the preferred name
+ * is propan-2-one).
  */
 export function retainedPrincipalParent(e: Evaluated, style: NameStyle): string | null {
   const kind = e.principal[0].group.kind;
-  const single = e.principal.length === 1;
+  const count = e.principal.length;
   const size = e.skeleton.atoms.length;
-  if (e.skeleton.kind === 'benzene' && single) return kind === 'ol' ? 'phenol' : kind === 'al' ? 'benzaldehyde' : null;
-  if (e.skeleton.kind !== 'chain' || !single) return null;
-  if (kind === 'al' && size === 1) {
-    if (e.prefixes.length > 0) throw new NamingRefusal('a substituted formaldehyde is another class (acid, ester, amide…), not named here');
-    return 'formaldehyde';
+  const bare = e.prefixes.length === 0 && e.multiple.length === 0;
+  if (e.skeleton.kind === 'benzene' && count === 1) return ({ ol: 'phenol', al: 'benzaldehyde', acid: 'benzoic acid' } as Record<string, string>)[kind] ?? null;
+  if (e.skeleton.kind !== 'chain') return null;
+  if (size === 1 && (kind === 'al' || kind === 'acid')) {
+    if (!bare) throw new NamingRefusal('a substituted formaldehyde or formic acid is another class (acid, ester, amide…), not named here');
+    return kind === 'al' ? 'formaldehyde' : 'formic acid';
   }
-  if (kind === 'al' && size === 2 && e.multiple.length === 0) {
-    if (e.prefixes.length > 0 && style === 'preferred') {
+  if (size === 2 && kind === 'acid') return count === 2 ? 'oxalic acid' : 'acetic acid';
+  if (size === 2 && kind === 'al' && count === 1) {
+    if (!bare && style === 'preferred') {
       throw new NamingRefusal('substituted acetaldehydes: the preferred name is not settled in this engine (the traditional style names them, e.g. phenylacetaldehyde)');
     }
     return 'acetaldehyde';
   }
-  if (style === 'traditional' && kind === 'one' && size === 3 && e.prefixes.length === 0 && e.multiple.length === 0) return 'acetone';
+  if (style === 'traditional' && kind === 'one' && size === 3 && bare) return 'acetone';
   return null;
 }
 
@@ -59,8 +65,8 @@ export function retainedPrincipalParent(e: Evaluated, style: NameStyle): string 
 export function withSuffix(e: Evaluated, hydride: string, citeLocants: boolean): string {
   const kind = e.principal[0].group.kind;
   const word = multiplier(e.principal.length) + suffixWord(kind, e.skeleton.kind);
-  // -al on a chain always sits on a chain end, so its locants are never cited (propanal, butanedial).
-  const locants = citeLocants && !(kind === 'al' && e.skeleton.kind === 'chain') ? `-${e.keys.principal.join(',')}-` : '';
+  // -al and -oic acid on a chain always sit on chain ends: their locants are never cited (propanal, hexanedioic acid).
+  const locants = citeLocants && !(suffixIncludesCarbon(kind) && e.skeleton.kind === 'chain') ? `-${e.keys.principal.join(',')}-` : '';
   // The final 'e' of the hydride name is elided before a vowel (propan-2-ol, but butane-1,4-diol).
   const stem = /^[aeiouy]/.test(word) ? hydride.replace(/e$/, '') : hydride;
   return stem + locants + word;

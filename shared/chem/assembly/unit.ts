@@ -3,6 +3,7 @@ import type { Evaluated } from '../numbering/evaluate';
 import { hydrideName, type FreeValenceKind } from './hydride';
 import { citePrefixes, joinPrefixes } from './prefixes';
 import { NamingRefusal } from './refusal';
+import { suffixIncludesCarbon } from '../groups/principal';
 import { principalLocantsOmitted, retainedPrincipalParent, withSuffix } from './suffixes';
 
 const FREE_VALENCE: Record<1 | 2 | 3, FreeValenceKind> = { 1: 'yl', 2: 'ylidene', 3: 'ylidyne' };
@@ -15,8 +16,8 @@ const FREE_VALENCE: Record<1 | 2 | 3, FreeValenceKind> = { 1: 'yl', 2: 'ylidene'
 function omitPrefixLocants(e: Evaluated): boolean {
   const size = e.skeleton.atoms.length;
   if (size === 1) return true;
-  // Substituted acetaldehydes (traditional style): every prefix sits on C-2.
-  if (e.principal.length) return principalLocantsOmitted(e) || (e.skeleton.kind === 'chain' && size === 2 && e.principal[0].group.kind === 'al');
+  // Substituted acetic acid (and acetaldehyde, traditional style): every prefix sits on C-2.
+  if (e.principal.length) return principalLocantsOmitted(e) || (e.skeleton.kind === 'chain' && size === 2 && suffixIncludesCarbon(e.principal[0].group.kind));
   if (e.attachment) return false;
   if (e.prefixes.length !== 1) return false;
   if (e.skeleton.kind === 'chain') return size === 2;
@@ -33,8 +34,10 @@ export function parentPart(e: Evaluated, ctx: NamingContext): string {
   if (e.closesRing) throw new NamingRefusal('a ring numbering that puts a multiple bond between the last and first ring atoms is not handled yet');
   const size = e.skeleton.atoms.length;
   if (e.principal.length) {
-    if (e.principal[0].group.kind === 'al' && e.skeleton.kind === 'chain' && e.prefixes.some((p) => p.substituent.name === 'formyl')) {
-      throw new NamingRefusal('more than two CHO groups on one chain: alkanetricarbaldehyde names (P-66.6.1.1.3) are not built yet');
+    const kind = e.principal[0].group.kind;
+    const twin = ({ al: 'formyl', acid: 'carboxy' } as Record<string, string>)[kind];
+    if (e.skeleton.kind === 'chain' && e.prefixes.some((p) => p.substituent.name === twin)) {
+      throw new NamingRefusal(`more than two ${kind === 'al' ? 'CHO' : 'COOH'} groups on one chain: names such as propane-1,2,3-tricarboxylic acid (P-65.1.2.2) are not built yet`);
     }
     const retained = retainedPrincipalParent(e, ctx.style);
     if (retained) return retained;

@@ -7,18 +7,31 @@ function chainNeighbours(ctx: NamingContext, atom: number, blocked: number): num
 }
 
 /**
- * All longest chains of the acyclic carbon tree containing `start` (P-44.3: the principal chain has
- * the greater number of skeletal atoms), each given in both directions. Only leaf-to-leaf paths
- * can be longest, so the search pairs leaves: breadth-first from every leaf.
+ * Chain neighbours inside a substituent group: the carbon of a -COOH group is not a chain atom
+ * there, because as a prefix the whole group is 'carboxy' (2-carboxyethyl, P-65.1.5.1).
  */
-export function longestParentChains(ctx: NamingContext, start: number): number[][] {
+function substituentChainNeighbours(ctx: NamingContext, atom: number, blocked: number): number[] {
+  return chainNeighbours(ctx, atom, blocked).filter((a) => !ctx.groups.has(a));
+}
+
+/** The atoms of the acyclic carbon tree containing `start`, and its leaves (atoms with one chain neighbour or none). */
+function carbonTree(ctx: NamingContext, start: number): { tree: number[]; leaves: number[] } {
   const tree: number[] = [];
   const seen = new Set<number>([start]);
   for (let i = 0, queue = [start]; i < queue.length; i++) {
     tree.push(queue[i]);
     for (const next of chainNeighbours(ctx, queue[i], -1)) if (!seen.has(next)) (seen.add(next), queue.push(next));
   }
-  const leaves = tree.filter((a) => chainNeighbours(ctx, a, -1).length <= 1);
+  return { tree, leaves: tree.filter((a) => chainNeighbours(ctx, a, -1).length <= 1) };
+}
+
+/**
+ * All longest chains of the acyclic carbon tree containing `start` (P-44.3: the principal chain has
+ * the greater number of skeletal atoms), each given in both directions. Only leaf-to-leaf paths
+ * can be longest, so the search pairs leaves: breadth-first from every leaf.
+ */
+export function longestParentChains(ctx: NamingContext, start: number): number[][] {
+  const { leaves } = carbonTree(ctx, start);
   let best = 0;
   let pairs: [number, number, Map<number, number>][] = [];
   for (const leaf of leaves) {
@@ -52,7 +65,7 @@ export function longestParentChains(ctx: NamingContext, start: number): number[]
  * 'alkyl' method of general nomenclature: '1-methylbutyl').
  */
 export function longestSubstituentChains(ctx: NamingContext, atom: number, from: number, fromAttachment: boolean): number[][] {
-  const branches = chainNeighbours(ctx, atom, from).map((first) => leafPaths(ctx, first, atom));
+  const branches = substituentChainNeighbours(ctx, atom, from).map((first) => leafPaths(ctx, first, atom));
   const longest = (paths: number[][]) => Math.max(0, ...paths.map((p) => p.length));
   const arms = branches.map((paths) => ({ paths, length: longest(paths) }));
   const candidates: number[][] = [];
@@ -84,7 +97,7 @@ function leafPaths(ctx: NamingContext, first: number, from: number): number[][] 
   const result: number[][] = [];
   const walk = (atom: number, previous: number, path: number[]) => {
     path.push(atom);
-    const next = chainNeighbours(ctx, atom, previous);
+    const next = substituentChainNeighbours(ctx, atom, previous);
     if (next.length === 0) result.push([...path]);
     for (const n of next) walk(n, atom, path);
     path.pop();
@@ -101,13 +114,7 @@ function leafPaths(ctx: NamingContext, first: number, from: number): number[][] 
  * to leaf, because lengthening a chain never loses a group.
  */
 export function principalChains(ctx: NamingContext, start: number, weight: (atom: number) => number): number[][] {
-  const tree: number[] = [];
-  const seen = new Set<number>([start]);
-  for (let i = 0, queue = [start]; i < queue.length; i++) {
-    tree.push(queue[i]);
-    for (const next of chainNeighbours(ctx, queue[i], -1)) if (!seen.has(next)) (seen.add(next), queue.push(next));
-  }
-  const leaves = tree.filter((a) => chainNeighbours(ctx, a, -1).length <= 1);
+  const { leaves } = carbonTree(ctx, start);
   let best = { groups: -1, length: 0 };
   let paths: number[][] = [];
   for (const leaf of leaves) {
@@ -143,10 +150,7 @@ export function chainTrees(ctx: NamingContext): number[] {
   for (let atom = 0; atom < ctx.graph.atoms.length; atom++) {
     if (seen.has(atom) || !isChainCarbon(ctx, atom)) continue;
     starts.push(atom);
-    for (let i = 0, queue = [atom]; i < queue.length; i++) {
-      seen.add(queue[i]);
-      for (const next of chainNeighbours(ctx, queue[i], -1)) if (!seen.has(next)) (seen.add(next), queue.push(next));
-    }
+    for (const a of carbonTree(ctx, atom).tree) seen.add(a);
   }
   return starts;
 }

@@ -2,18 +2,26 @@ import type { MolGraph } from '../graph/types';
 import type { PrefixGroup } from './scope';
 
 /** Characteristic groups the engine can express as a suffix, in descending seniority (P-41). */
-export type SuffixKind = 'al' | 'one' | 'ol';
-const SENIORITY: SuffixKind[] = ['al', 'one', 'ol'];
+export type SuffixKind = 'acid' | 'al' | 'one' | 'ol';
+const SENIORITY: SuffixKind[] = ['acid', 'al', 'one', 'ol'];
+
+/**
+ * Groups whose suffix includes a carbon atom: inside a chain that carbon is a chain atom (-oic
+ * acid, -al); on a ring it hangs outside (-carboxylic acid, -carbaldehyde), P-65.1.2, P-66.6.1.
+ */
+export function suffixIncludesCarbon(kind: SuffixKind): boolean {
+  return kind === 'acid' || kind === 'al';
+}
 
 /**
  * One occurrence of the principal characteristic group. `carbon` is the carbon that carries the
- * group's heteroatom: the CHO carbon itself for aldehydes (P-66.6.1), the carbon bearing =O for
- * ketones (P-64.2) and -OH for alcohols and phenols (P-63.1). `oxygen` is that heteroatom.
+ * group's heteroatoms: the COOH or CHO carbon itself for acids and aldehydes, the carbon bearing
+ * =O for ketones (P-64.2) and -OH for alcohols and phenols (P-63.1). `atoms` are the heteroatoms.
  */
 export interface PrincipalGroup {
   kind: SuffixKind;
   carbon: number;
-  oxygen: number;
+  atoms: number[];
 }
 
 /** An oxo group on a carbon with at most one carbon neighbour is an aldehyde (or formaldehyde). */
@@ -23,16 +31,20 @@ export function isAldehydeCarbon(graph: MolGraph, c: number): boolean {
 }
 
 /**
- * The principal characteristic group (P-41 seniority of classes: aldehydes > ketones >
+ * The principal characteristic group (P-41 seniority of classes: acids > aldehydes > ketones >
  * alcohols) and every occurrence of it; an empty list when the molecule has none of them.
  */
 export function findPrincipalGroups(graph: MolGraph, groups: Map<number, PrefixGroup>): PrincipalGroup[] {
   const found: PrincipalGroup[] = [];
   for (const group of groups.values()) {
+    if (group.kind === 'carboxy') {
+      found.push({ kind: 'acid', carbon: group.atom, atoms: group.atoms.filter((a) => a !== group.atom) });
+      continue;
+    }
     if (group.kind !== 'hydroxy' && group.kind !== 'oxo') continue;
     const carbon = graph.adjacency[group.atom][0].atom;
     const kind: SuffixKind = group.kind === 'hydroxy' ? 'ol' : isAldehydeCarbon(graph, carbon) ? 'al' : 'one';
-    found.push({ kind, carbon, oxygen: group.atom });
+    found.push({ kind, carbon, atoms: [group.atom] });
   }
   for (const kind of SENIORITY) {
     const chosen = found.filter((g) => g.kind === kind);

@@ -1,12 +1,12 @@
 import type { MolGraph } from '../graph/types';
 import { NamingRefusal } from '../assembly/refusal';
 
-export type PrefixGroupKind = 'fluoro' | 'chloro' | 'bromo' | 'iodo' | 'nitro' | 'hydroxy' | 'oxo' | 'ether';
+export type PrefixGroupKind = 'fluoro' | 'chloro' | 'bromo' | 'iodo' | 'nitro' | 'hydroxy' | 'oxo' | 'ether' | 'carboxy';
 
 /**
  * A non-carbon group hanging from a carbon atom, as the engine cites it when it is not the
  * principal characteristic group: halogen (P-61.3), nitro (P-61.5), hydroxy (P-63.1.3), oxo
- * (P-64.1.2) prefixes; 'ether' marks a bridging oxygen named as an alkoxy or aryloxy prefix
+ * (P-64.1.2), carboxy (P-65.1.5.1: the whole COOH, keyed by its carbon) prefixes; 'ether' marks a bridging oxygen named as an alkoxy or aryloxy prefix
  * (P-63.2.2.2) from either side.
  */
 export interface PrefixGroup {
@@ -25,6 +25,13 @@ const HALO: Record<string, PrefixGroupKind> = { F: 'fluoro', Cl: 'chloro', Br: '
 export function findPrefixGroups(graph: MolGraph): Map<number, PrefixGroup> {
   const groups = new Map<number, PrefixGroup>();
   const claimed = new Set<number>();
+  for (const atom of graph.atoms) {
+    const acid = atom.element === 'C' ? carboxyGroup(graph, atom.index) : null;
+    if (acid) {
+      groups.set(atom.index, acid);
+      for (const a of acid.atoms) if (a !== atom.index) claimed.add(a);
+    }
+  }
   for (const atom of graph.atoms) {
     if (atom.element === 'C' || claimed.has(atom.index)) continue;
     const neighbours = graph.adjacency[atom.index];
@@ -69,6 +76,16 @@ function nitroGroup(graph: MolGraph, n: number): PrefixGroup | null {
   return { kind: 'nitro', atom: n, atoms: [n, ...oxygens.map((e) => e.atom)] };
 }
 
+/** C(=O)OH on a carbon whose remaining neighbour, if any, is carbon. */
+function carboxyGroup(graph: MolGraph, c: number): PrefixGroup | null {
+  const edges = graph.adjacency[c];
+  const oxo = edges.find((e) => graph.atoms[e.atom].element === 'O' && graph.bonds[e.bond].order === 2 && graph.atoms[e.atom].charge === 0);
+  const hydroxy = edges.find((e) => graph.atoms[e.atom].element === 'O' && graph.bonds[e.bond].order === 1 && graph.atoms[e.atom].hydrogens === 1 && graph.atoms[e.atom].charge === 0 && graph.adjacency[e.atom].length === 1);
+  if (!oxo || !hydroxy) return null;
+  if (edges.some((e) => e !== oxo && e !== hydroxy && graph.atoms[e.atom].element !== 'C')) return null;
+  return { kind: 'carboxy', atom: c, atoms: [c, oxo.atom, hydroxy.atom] };
+}
+
 /** True when carbon `c` carries a doubly bonded oxygen. */
 export function isCarbonyl(graph: MolGraph, c: number): boolean {
   return graph.adjacency[c].some((e) => graph.atoms[e.atom].element === 'O' && graph.bonds[e.bond].order === 2);
@@ -101,6 +118,7 @@ function oxygenGroup(graph: MolGraph, o: number): PrefixGroup | null {
 
 function carbonylRefusal(graph: MolGraph, c: number, where: string): string {
   const elements = new Set(graph.adjacency[c].map((e) => graph.atoms[e.atom].element));
+  if (graph.adjacency[c].some((e) => graph.atoms[e.atom].charge !== 0)) return `${where} belongs to a charged group (e.g. a carboxylate): ions are not named yet`;
   const carbonylOxygens = graph.adjacency[c].filter((e) => graph.atoms[e.atom].element === 'O').length;
   if (elements.has('N')) return `${where} belongs to an amide or other C(=O)-N group, which is not named yet`;
   if (['F', 'Cl', 'Br', 'I'].some((x) => elements.has(x))) return `${where} belongs to an acid halide, which is not named yet`;

@@ -1,6 +1,6 @@
 import { bondBetween } from '../graph/rings';
 import type { Attachment, NamingContext, Prefix, Skeleton } from './context';
-import type { PrincipalGroup } from '../groups/principal';
+import { suffixIncludesCarbon, type PrincipalGroup } from '../groups/principal';
 import { nameSubstituent } from '../substituents/substituent';
 
 /** What the seniority and numbering rules look at, for one candidate parent in one numbering. */
@@ -42,7 +42,8 @@ export function evaluate(ctx: NamingContext, skeleton: Skeleton, attachment: Att
       if (attachment && atom === attachment.atom && next === attachment.from) continue;
       const suffix = attachment ? undefined : suffixGroup(ctx, skeleton, atom, next);
       if (suffix) {
-        principal.push({ locant: i + 1, group: suffix });
+        // A group with two atoms on the carbon (COOH) is one suffix.
+        if (!principal.some((p) => p.group === suffix)) principal.push({ locant: i + 1, group: suffix });
         continue;
       }
       prefixes.push({ locant: i + 1, substituent: nameSubstituent(ctx, next, atom) });
@@ -62,13 +63,14 @@ export function evaluate(ctx: NamingContext, skeleton: Skeleton, attachment: Att
 
 /**
  * The principal group reached from skeleton atom `atom` through its neighbour `next`, if any: the
- * group's oxygen on its own carbon (-ol, -one, and -al when the CHO carbon is in the chain), or,
- * on rings, the whole CHO group hanging from a ring atom (-carbaldehyde, P-66.6.1.1.2).
+ * group's heteroatoms on its own carbon (-ol, -one, and -al or -oic acid when that carbon is in
+ * the chain), or, on rings, the whole CHO or COOH group hanging from a ring atom (-carbaldehyde,
+ * -carboxylic acid, P-66.6.1.1.3, P-65.1.2.2).
  */
 function suffixGroup(ctx: NamingContext, skeleton: Skeleton, atom: number, next: number): PrincipalGroup | undefined {
   for (const group of ctx.principal) {
-    if (group.carbon === atom && group.oxygen === next) return group;
-    if (group.kind === 'al' && skeleton.kind !== 'chain' && group.carbon === next) return group;
+    if (group.carbon === atom && group.atoms.includes(next)) return group;
+    if (suffixIncludesCarbon(group.kind) && skeleton.kind !== 'chain' && group.carbon === next) return group;
   }
   return undefined;
 }
