@@ -7,7 +7,8 @@ const COLUMNS = ['event_id', 'occurred_at_utc', 'type', 'actor_id', 'actor_name'
 /**
  * The trail as CSV (RFC 4180) for inspection outside the app (21 CFR 11.10(b): accurate and
  * complete copies in human-readable and electronic form). Includes the hashes so the copy can
- * be checked against the chain.
+ * be checked against the chain. Cells are not prefixed against spreadsheet formula reading (a
+ * cell starting with =, +, - or @): that would alter the copy; DEVELOPERS.md says how to open it safely.
  */
 export function auditCsv(events: AuditEventView[]): string {
   const rows = events.map((e) => [

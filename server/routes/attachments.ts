@@ -94,6 +94,8 @@ export function attachmentRoutes(deps: AppDeps): Router {
       await db.transaction(async (tx) => {
         // Whether the page is signed is read in the same statement as the insert, so a file that
         // lands after a signature is always an addendum, never silently part of the signed record.
+        // FOR SHARE holds signing's lock claim (and a return) back until this commits, so signing
+        // reads the file's row with the page's content, or the file sees the page locked.
         const inserted = await tx
           .insert(attachments)
           .values(
@@ -103,7 +105,7 @@ export function attachmentRoutes(deps: AppDeps): Router {
               uploaderId: user.id,
               // Evaluated per row, so files of one request keep the order they were sent in.
               createdAt: sql`clock_timestamp()`,
-              addendum: sql`(select ${pages.locked} from ${pages} where ${pages.id} = ${access.page.id})`,
+              addendum: sql`(select ${pages.locked} from ${pages} where ${pages.id} = ${access.page.id} for share)`,
             })),
           )
           .returning({ id: attachments.id, addendum: attachments.addendum });

@@ -16,7 +16,10 @@ function pageIdentity(page: PageRow): PageRecordContent['page'] {
   return { id: page.id, notebookId: page.notebookId, number: page.number, title: page.title };
 }
 
-/** Files that belong to the original page; later uploads are addenda and outside its signature. */
+/**
+ * Files that belong to the page: all but those uploaded while it was signed and still waiting for,
+ * or claimed by, an addendum (see returnUnclaimedFilesToPage for when they come back to the page).
+ */
 async function originalAttachments(db: Reader, pageId: string): Promise<RecordAttachment[]> {
   return db
     .select({ id: attachments.id, name: attachments.displayName, sha256: attachments.sha256, size: attachments.size })

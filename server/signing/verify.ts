@@ -6,6 +6,7 @@ import { addenda, auditEvents, countersignRequests, signatures, type PageRow, ty
 import { recordHash, sha256Hex, type RecordContent } from './canonical';
 import { describeChanges } from './changes';
 import { addendumContent, storedPageContent } from './content';
+import { filesLeftOutByReturn } from './pageFiles';
 import { signatureAuditDetails } from './workflow';
 
 /** Author signatures whose countersign request was returned no longer cover the page. */
@@ -60,6 +61,7 @@ export async function verifyPage(db: Database, page: PageRow): Promise<VerifyRep
   const recorded = new Map(events.map((e) => [(e.details as { signatureId: string }).signatureId, e.details as Record<string, unknown>]));
 
   const pageNow = await storedPageContent(db, page);
+  const leftOut = await filesLeftOutByReturn(db, page.id);
   const addendaNow = new Map<string, RecordContent>();
   for (const a of addendumRows) addendaNow.set(a.id, await addendumContent(db, a));
 
@@ -76,6 +78,10 @@ export async function verifyPage(db: Database, page: PageRow): Promise<VerifyRep
         const signed = parseSigned(signature.signedContent);
         const described = signed ? describeChanges(signed, current) : [];
         changes.push(...(described.length ? described : ['The content differs from what was signed']));
+      }
+      // 11.70: a page signature must cover all of the page; a file no signature covers is a gap in the record.
+      if (!signature.addendumId) {
+        for (const file of leftOut) changes.push(`File "${file.name}" was on the page before it was returned, but no signature covers it`);
       }
     }
     return {

@@ -29,6 +29,7 @@ import { conflict, forbidden, HttpError } from '../http/errors';
 import { recordHash, type RecordContent } from './canonical';
 import { addendumContent, livePageContent, storedPageContent, type SigningHub } from './content';
 import { confirmSigner } from './identity';
+import { returnUnclaimedFilesToPage } from './pageFiles';
 import { notifyCountersigned, notifyCountersignRequested, notifyReturned } from './notify';
 
 type Tx = Parameters<Parameters<Database['transaction']>[0]>[0];
@@ -183,11 +184,17 @@ export async function signPage(deps: AppDeps, hub: SigningHub, user: User, acces
 
   // Claim the lock in the database first (the collaboration server takes it as the truth for new
   // connections), then stop the open editors and read the content: nothing slips in unsigned.
-  const [claimed] = await db
-    .update(pages)
-    .set({ locked: true })
-    .where(and(eq(pages.id, page.id), eq(pages.status, 'draft'), eq(pages.locked, false)))
-    .returning();
+  const claimed = await db.transaction(async (tx) => {
+    const [row] = await tx
+      .update(pages)
+      .set({ locked: true })
+      .where(and(eq(pages.id, page.id), eq(pages.status, 'draft'), eq(pages.locked, false)))
+      .returning();
+    // Files left waiting for an addendum by an earlier lock (a failed attempt, or a return made
+    // before returns handed them back) are the page's: this signature covers them.
+    if (row) await returnUnclaimedFilesToPage(tx, page.id);
+    return row;
+  });
   if (!claimed) throw conflict('already_signed', 'This page was signed meanwhile; nothing was changed');
   let signatureId: string;
   try {
@@ -273,14 +280,25 @@ export async function returnWork(deps: AppDeps, hub: SigningHub, user: User, acc
       .insert(pageReturns)
       .values({ requestId: request.id, pageId: page.id, addendumId: addendum?.id ?? null, returnedBy: user.id, returnedByName: user.name, comment: input.comment, returnedAt: now() })
       .returning();
-    // A returned page goes back to its author as a draft; a returned addendum stays (it is already part of the record).
-    if (!addendum) await tx.update(pages).set({ status: 'draft', locked: false, updatedAt: now() }).where(eq(pages.id, page.id));
+    // A returned page goes back to its author as a draft, with the files no addendum claimed; a
+    // returned addendum stays (it is already part of the record).
+    let filesBackOnPage: string[] = [];
+    if (!addendum) {
+      await tx.update(pages).set({ status: 'draft', locked: false, updatedAt: now() }).where(eq(pages.id, page.id));
+      filesBackOnPage = await returnUnclaimedFilesToPage(tx, page.id);
+    }
     await appendInTransaction(tx, {
       type: addendum ? 'addendum.returned' : 'page.returned',
       actor: user,
       notebookId: page.notebookId,
       pageId: page.id,
-      details: { requestId: request.id, returnId: returned.id, addendumId: addendum?.id ?? null, comment: input.comment },
+      details: {
+        requestId: request.id,
+        returnId: returned.id,
+        addendumId: addendum?.id ?? null,
+        comment: input.comment,
+        ...(addendum ? {} : { filesBackOnPage }),
+      },
     });
   });
   if (!addendum) await hub.setPageLocked(page.id, false);
