@@ -173,6 +173,8 @@ describe('page editor, a viewer', () => {
     expect(await viewer.getByRole('toolbar', { name: 'Formatting' }).count()).toBe(0);
     expect(await viewer.getByRole('button', { name: 'Redraw' }).count()).toBe(0);
 
+    // Wait until every structure block has finished naming, so the text can only change by typing.
+    await expect.poll(() => viewer.getByText('Naming…').count(), { timeout: 15_000 }).toBe(0);
     const before = await pageText(viewer).textContent();
     await pageText(viewer).click();
     await viewer.keyboard.type('viewer was here');

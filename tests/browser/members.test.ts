@@ -45,6 +45,7 @@ describe('notebook members', () => {
     const person = add.getByLabel('Person');
     const part = add.getByLabel('Part in this notebook');
     // The directory lists the whole seeded group except the owner, who is already a member.
+    await person.locator('option', { hasText: 'Rafe Mossgiel' }).waitFor({ state: 'attached' });
     const offered = await person.locator('option').allTextContents();
     expect(offered).toContain('Rafe Mossgiel (Bench chemist)');
     expect(offered).toContain('Perpetua Lisle (Viewer)');
