@@ -10,9 +10,12 @@ export interface TestServer {
   close(): Promise<void>;
 }
 
-/** The real app on a free loopback port, wired to the suite's services (see global-setup.ts). */
+/**
+ * The real app on loopback, wired to the suite's services (see global-setup.ts). It takes a free
+ * port unless `overrides.PORT` names one (a restart on the same address, for reconnecting clients).
+ */
 export async function startServer(overrides: Record<string, string> = {}): Promise<TestServer> {
-  const port = await freePort();
+  const port = overrides.PORT ? Number(overrides.PORT) : await freePort();
   const config = loadConfig({ ...process.env, PORT: String(port), HOST: '127.0.0.1', ...overrides });
   const deps = await createDeps(config);
   const { server, close } = createHttpServer(deps);
