@@ -3,7 +3,7 @@ import { findRingSystems, type RingSystems } from '../graph/rings';
 import { findPrefixGroups } from '../groups/scope';
 import { chainTrees, longestParentChains, principalChains } from '../chain/paths';
 import { findPrincipalGroups, suffixIncludesCarbon } from '../groups/principal';
-import type { NamingContext, Skeleton } from '../numbering/context';
+import { locantText, type NamingContext, type Skeleton } from '../numbering/context';
 import { evaluate, type Evaluated } from '../numbering/evaluate';
 import { bestCandidates, firstByName } from '../numbering/select';
 import { isBenzene, isMancudeNonBenzene, ringNumberings } from '../rings/numberings';
@@ -66,9 +66,9 @@ function nameOrRefuse(graph: MolGraph, style: NameStyle): Naming {
  */
 function parentCandidates(ctx: NamingContext): Skeleton[] {
   const { graph, rings } = ctx;
-  const weight = (atom: number) => ctx.principal.filter((g) => g.carbon === atom).length;
+  const weight = (atom: number) => ctx.principal.filter((g) => g.anchors.includes(atom)).length;
   const onRing = (atoms: Set<number>) =>
-    ctx.principal.filter((g) => atoms.has(g.carbon) || (suffixIncludesCarbon(g.kind) && graph.adjacency[g.carbon].some((e) => atoms.has(e.atom)))).length;
+    ctx.principal.filter((g) => g.anchors.some((a) => atoms.has(a)) || (suffixIncludesCarbon(g.kind) && graph.adjacency[g.anchors[0]].some((e) => atoms.has(e.atom)))).length;
   const ranked = rings.systems.map((system) => {
     const numberings = ringNumberings(graph, system.atoms, null);
     const multiple = numberings[0].kind === 'benzene' ? system.atoms.length / 2 : evaluateMultipleBonds(ctx, numberings[0]);
@@ -127,15 +127,15 @@ function explain(ctx: NamingContext, e: Evaluated): Explanation {
   const explanation: Explanation = {
     parent: { kind: e.skeleton.kind, name: parentPart(e, ctx), atoms: [...e.skeleton.atoms] },
     substituents: e.prefixes
-      .map((p) => ({ locant: String(p.locant), name: p.substituent.name, atoms: p.substituent.atoms }))
-      .sort((a, b) => Number(a.locant) - Number(b.locant)),
+      .sort((a, b) => a.locant - b.locant)
+      .map((p) => ({ locant: locantText(p.locant), name: p.substituent.name, atoms: p.substituent.atoms })),
   };
   if (e.principal.length) {
     explanation.principalGroups = e.principal
       .map(({ locant, group }) => ({
         locant: String(locant),
         suffix: suffixWord(group.kind, e.skeleton.kind),
-        atoms: suffixIncludesCarbon(group.kind) ? [group.carbon, ...group.atoms] : [...group.atoms],
+        atoms: suffixIncludesCarbon(group.kind) ? [group.anchors[0], ...group.atoms] : [...group.atoms],
       }))
       .sort((a, b) => Number(a.locant) - Number(b.locant));
   }

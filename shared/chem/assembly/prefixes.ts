@@ -1,4 +1,4 @@
-import type { Prefix } from '../numbering/context';
+import { locantText, type Prefix } from '../numbering/context';
 import { compareAlphanumerical } from './alphanumeric';
 import { enclose } from './enclosing';
 import { complexMultiplier, multiplier } from './numerals';
@@ -21,7 +21,7 @@ export function citePrefixes(prefixes: Prefix[], omitLocants: boolean): CitedPre
   const groups = [...byName.values()].sort((a, b) => compareAlphanumerical(a[0].substituent.name, b[0].substituent.name));
   return groups.map((group) => {
     const { substituent } = group[0];
-    const locants = group.map((p) => p.locant).sort((a, b) => a - b).map(String);
+    const locants = group.map((p) => p.locant).sort((a, b) => a - b).map(locantText);
     const count = group.length;
     const wrapped = substituent.enclose ? enclose(substituent.name) : substituent.name;
     let mult = '';
@@ -34,5 +34,5 @@ export function citePrefixes(prefixes: Prefix[], omitLocants: boolean): CitedPre
 }
 
 export function joinPrefixes(cited: CitedPrefix[]): string {
-  return cited.map((c, i) => (i > 0 && /^\d/.test(c.text) ? '-' : '') + c.text).join('');
+  return cited.map((c, i) => (i > 0 && /^(\d|N[,-])/.test(c.text) ? '-' : '') + c.text).join('');
 }

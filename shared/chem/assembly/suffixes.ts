@@ -2,6 +2,7 @@ import { suffixIncludesCarbon, type SuffixKind } from '../groups/principal';
 import type { Skeleton } from '../numbering/context';
 import type { Evaluated } from '../numbering/evaluate';
 import { multiplier } from './numerals';
+import { N_LOCANT } from '../numbering/context';
 import { NamingRefusal } from './refusal';
 import type { NameStyle } from './style';
 
@@ -25,15 +26,16 @@ export function suffixWord(kind: SuffixKind, skeleton: Skeleton['kind']): string
 export function principalLocantsOmitted(e: Evaluated): boolean {
   const size = e.skeleton.atoms.length;
   if (size === 1) return true;
-  if (e.principal.length !== 1 || e.prefixes.length > 0) return false;
+  // N-prefixes (N-methylethanamine) leave the carbon locants unambiguous.
+  if (e.principal.length !== 1 || e.prefixes.some((p) => p.locant !== N_LOCANT)) return false;
   if (e.skeleton.kind === 'chain') return size === 2;
   return e.multiple.length === 0;
 }
 
 /**
  * Retained names with principal groups (P-63.1.1, P-64.2.1.3, P-65.1.1.1, P-66.6.1.1.1; written
- * from memory): phenol, benzaldehyde and benzoic acid are preferred IUPAC names and take ring
- * substituents (4-chlorophenol); acetic acid is a preferred name that takes substituents on C-2
+ * from memory): phenol, aniline (P-62.2.1.1.1), benzaldehyde and benzoic acid are preferred IUPAC names and take ring
+ * substituents (4-chlorophenol, N-methylaniline); acetic acid is a preferred name that takes substituents on C-2
  * (chloroacetic acid, phenylacetic acid); formic acid, oxalic acid, formaldehyde and acetaldehyde
  * are preferred names of the bare compounds (substituted acetaldehydes are named only in the
  * traditional style, e.g. phenylacetaldehyde); acetone is a general name only (the preferred name
@@ -44,7 +46,7 @@ export function retainedPrincipalParent(e: Evaluated, style: NameStyle): string 
   const count = e.principal.length;
   const size = e.skeleton.atoms.length;
   const bare = e.prefixes.length === 0 && e.multiple.length === 0;
-  if (e.skeleton.kind === 'benzene' && count === 1) return ({ ol: 'phenol', al: 'benzaldehyde', acid: 'benzoic acid' } as Record<string, string>)[kind] ?? null;
+  if (e.skeleton.kind === 'benzene' && count === 1) return ({ ol: 'phenol', al: 'benzaldehyde', acid: 'benzoic acid', amine: 'aniline' } as Record<string, string>)[kind] ?? null;
   if (e.skeleton.kind !== 'chain') return null;
   if (size === 1 && (kind === 'al' || kind === 'acid')) {
     if (!bare) throw new NamingRefusal('a substituted formaldehyde or formic acid is another class (acid, ester, amide…), not named here');

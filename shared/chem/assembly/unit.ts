@@ -1,4 +1,4 @@
-import type { NamingContext } from '../numbering/context';
+import { N_LOCANT, type NamingContext } from '../numbering/context';
 import type { Evaluated } from '../numbering/evaluate';
 import { hydrideName, type FreeValenceKind } from './hydride';
 import { citePrefixes, joinPrefixes } from './prefixes';
@@ -15,6 +15,7 @@ const FREE_VALENCE: Record<1 | 2 | 3, FreeValenceKind> = { 1: 'yl', 2: 'ylidene'
  */
 function omitPrefixLocants(e: Evaluated): boolean {
   const size = e.skeleton.atoms.length;
+  if (e.prefixes.some((p) => p.locant === N_LOCANT)) return false;
   if (size === 1) return true;
   // Substituted acetic acid (and acetaldehyde, traditional style): every prefix sits on C-2.
   if (e.principal.length) return principalLocantsOmitted(e) || (e.skeleton.kind === 'chain' && size === 2 && suffixIncludesCarbon(e.principal[0].group.kind));
@@ -38,6 +39,13 @@ export function parentPart(e: Evaluated, ctx: NamingContext): string {
     const twin = ({ al: 'formyl', acid: 'carboxy' } as Record<string, string>)[kind];
     if (e.skeleton.kind === 'chain' && e.prefixes.some((p) => p.substituent.name === twin)) {
       throw new NamingRefusal(`more than two ${kind === 'al' ? 'CHO' : 'COOH'} groups on one chain: names such as propane-1,2,3-tricarboxylic acid (P-65.1.2.2) are not built yet`);
+    }
+    // P-103.1: common α-amino acids have retained names (glycine, alanine…) that are not given here.
+    if (kind === 'acid' && e.skeleton.kind === 'chain' && e.prefixes.some((p) => p.locant === 2 && p.substituent.name === 'amino')) {
+      throw new NamingRefusal('α-amino acids have retained names (P-103) that the engine does not give yet');
+    }
+    if (kind === 'amine' && e.principal.length > 1 && e.prefixes.some((p) => p.locant === N_LOCANT)) {
+      throw new NamingRefusal('N-substituted polyamines need N1/N2 locants (P-62.2.1.1.2), which are not built yet');
     }
     const retained = retainedPrincipalParent(e, ctx.style);
     if (retained) return retained;

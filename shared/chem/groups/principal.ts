@@ -2,8 +2,8 @@ import type { MolGraph } from '../graph/types';
 import type { PrefixGroup } from './scope';
 
 /** Characteristic groups the engine can express as a suffix, in descending seniority (P-41). */
-export type SuffixKind = 'acid' | 'al' | 'one' | 'ol';
-const SENIORITY: SuffixKind[] = ['acid', 'al', 'one', 'ol'];
+export type SuffixKind = 'acid' | 'al' | 'one' | 'ol' | 'amine';
+const SENIORITY: SuffixKind[] = ['acid', 'al', 'one', 'ol', 'amine'];
 
 /**
  * Groups whose suffix includes a carbon atom: inside a chain that carbon is a chain atom (-oic
@@ -14,13 +14,15 @@ export function suffixIncludesCarbon(kind: SuffixKind): boolean {
 }
 
 /**
- * One occurrence of the principal characteristic group. `carbon` is the carbon that carries the
- * group's heteroatoms: the COOH or CHO carbon itself for acids and aldehydes, the carbon bearing
- * =O for ketones (P-64.2) and -OH for alcohols and phenols (P-63.1). `atoms` are the heteroatoms.
+ * One occurrence of the principal characteristic group. `anchors` are the carbons that can carry
+ * it on a parent: the COOH or CHO carbon itself for acids and aldehydes, the carbon bearing =O
+ * for ketones (P-64.2) and -OH for alcohols and phenols (P-63.1), and every carbon on an amine
+ * nitrogen (P-62.2.1.1: the parent is chosen among them, the others become N-prefixes).
+ * `atoms` are the heteroatoms.
  */
 export interface PrincipalGroup {
   kind: SuffixKind;
-  carbon: number;
+  anchors: number[];
   atoms: number[];
 }
 
@@ -32,19 +34,23 @@ export function isAldehydeCarbon(graph: MolGraph, c: number): boolean {
 
 /**
  * The principal characteristic group (P-41 seniority of classes: acids > aldehydes > ketones >
- * alcohols) and every occurrence of it; an empty list when the molecule has none of them.
+ * alcohols > amines) and every occurrence of it; an empty list when the molecule has none of them.
  */
 export function findPrincipalGroups(graph: MolGraph, groups: Map<number, PrefixGroup>): PrincipalGroup[] {
   const found: PrincipalGroup[] = [];
   for (const group of groups.values()) {
     if (group.kind === 'carboxy') {
-      found.push({ kind: 'acid', carbon: group.atom, atoms: group.atoms.filter((a) => a !== group.atom) });
+      found.push({ kind: 'acid', anchors: [group.atom], atoms: group.atoms.filter((a) => a !== group.atom) });
+      continue;
+    }
+    if (group.kind === 'amino') {
+      found.push({ kind: 'amine', anchors: graph.adjacency[group.atom].map((e) => e.atom), atoms: [group.atom] });
       continue;
     }
     if (group.kind !== 'hydroxy' && group.kind !== 'oxo') continue;
     const carbon = graph.adjacency[group.atom][0].atom;
     const kind: SuffixKind = group.kind === 'hydroxy' ? 'ol' : isAldehydeCarbon(graph, carbon) ? 'al' : 'one';
-    found.push({ kind, carbon, atoms: [group.atom] });
+    found.push({ kind, anchors: [carbon], atoms: [group.atom] });
   }
   for (const kind of SENIORITY) {
     const chosen = found.filter((g) => g.kind === kind);

@@ -1,12 +1,13 @@
 import type { MolGraph } from '../graph/types';
 import { NamingRefusal } from '../assembly/refusal';
 
-export type PrefixGroupKind = 'fluoro' | 'chloro' | 'bromo' | 'iodo' | 'nitro' | 'hydroxy' | 'oxo' | 'ether' | 'carboxy';
+export type PrefixGroupKind = 'fluoro' | 'chloro' | 'bromo' | 'iodo' | 'nitro' | 'hydroxy' | 'oxo' | 'ether' | 'carboxy' | 'amino';
 
 /**
  * A non-carbon group hanging from a carbon atom, as the engine cites it when it is not the
  * principal characteristic group: halogen (P-61.3), nitro (P-61.5), hydroxy (P-63.1.3), oxo
- * (P-64.1.2), carboxy (P-65.1.5.1: the whole COOH, keyed by its carbon) prefixes; 'ether' marks a bridging oxygen named as an alkoxy or aryloxy prefix
+ * (P-64.1.2), carboxy (P-65.1.5.1: the whole COOH, keyed by its carbon), amino (P-62.2.1.1,
+ * with its own N-substituents) prefixes; 'ether' marks a bridging oxygen named as an alkoxy or aryloxy prefix
  * (P-63.2.2.2) from either side.
  */
 export interface PrefixGroup {
@@ -48,6 +49,12 @@ export function findPrefixGroups(graph: MolGraph): Map<number, PrefixGroup> {
       continue;
     }
     if (atom.element === 'O' && neighbours.length === 1 && graph.atoms[neighbours[0].atom].element === 'N' && nitroGroup(graph, neighbours[0].atom)) continue;
+    const amine = aminoGroup(graph, atom.index);
+    if (amine) {
+      groups.set(atom.index, amine);
+      claimed.add(atom.index);
+      continue;
+    }
     const oxygen = oxygenGroup(graph, atom.index);
     if (oxygen) {
       groups.set(atom.index, oxygen);
@@ -84,6 +91,21 @@ function carboxyGroup(graph: MolGraph, c: number): PrefixGroup | null {
   if (!oxo || !hydroxy) return null;
   if (edges.some((e) => e !== oxo && e !== hydroxy && graph.atoms[e.atom].element !== 'C')) return null;
   return { kind: 'carboxy', atom: c, atoms: [c, oxo.atom, hydroxy.atom] };
+}
+
+/**
+ * A neutral amine nitrogen: one to three carbons by single bonds, hydrogens for the rest
+ * (P-62.2). Nitrogen on a carbonyl carbon is an amide, which is refused by name.
+ */
+function aminoGroup(graph: MolGraph, n: number): PrefixGroup | null {
+  const atom = graph.atoms[n];
+  const edges = graph.adjacency[n];
+  if (atom.element !== 'N' || atom.charge !== 0 || edges.length === 0) return null;
+  if (edges.some((e) => graph.atoms[e.atom].element !== 'C' || graph.bonds[e.bond].order !== 1)) return null;
+  if (edges.length + atom.hydrogens !== 3) return null;
+  const acyl = edges.find((e) => isCarbonyl(graph, e.atom));
+  if (acyl) throw new NamingRefusal(`the N atom ${n + 1} belongs to an amide or other C(=O)-N group, which is not named yet`);
+  return { kind: 'amino', atom: n, atoms: [n] };
 }
 
 /** True when carbon `c` carries a doubly bonded oxygen. */
@@ -130,7 +152,7 @@ function describeUnhandled(graph: MolGraph, index: number): string {
   const atom = graph.atoms[index];
   if (atom.charge !== 0) return `charged atom ${atom.element}${atom.charge > 0 ? '+' : '-'} (atom ${index + 1}): ions are not named yet`;
   if (['N', 'O', 'S', 'P', 'B'].includes(atom.element)) {
-    return `the ${atom.element} atom ${index + 1} belongs to a characteristic group that is not named yet (named: halogen, nitro, alcohols, ketones, aldehydes, ethers)`;
+    return `the ${atom.element} atom ${index + 1} belongs to a characteristic group that is not named yet (named: halogen, nitro, acids, aldehydes, ketones, alcohols, ethers, amines)`;
   }
   return `atom ${index + 1} (${atom.element}) is not handled yet`;
 }

@@ -41,6 +41,16 @@ export interface Attachment {
   order: 1 | 2 | 3;
 }
 
+/**
+ * The italic locant N of a substituent on an amine nitrogen, held as 0: it is the same in every
+ * numbering, and P-14.3.5 ranks letter locants below numerals.
+ */
+export const N_LOCANT = 0;
+
+export function locantText(locant: number): string {
+  return locant === N_LOCANT ? 'N' : String(locant);
+}
+
 export interface Prefix {
   locant: number;
   substituent: SubstituentName;

@@ -1,6 +1,7 @@
 import { bondBetween } from '../graph/rings';
 import type { Attachment, NamingContext, Prefix, Skeleton } from './context';
 import { suffixIncludesCarbon, type PrincipalGroup } from '../groups/principal';
+import { N_LOCANT } from './context';
 import { nameSubstituent } from '../substituents/substituent';
 
 /** What the seniority and numbering rules look at, for one candidate parent in one numbering. */
@@ -44,6 +45,10 @@ export function evaluate(ctx: NamingContext, skeleton: Skeleton, attachment: Att
       if (suffix) {
         // A group with two atoms on the carbon (COOH) is one suffix.
         if (!principal.some((p) => p.group === suffix)) principal.push({ locant: i + 1, group: suffix });
+        // P-62.2.1.1: the other groups on an amine nitrogen are N-prefixes (locant N, kept as 0).
+        if (suffix.kind === 'amine') {
+          for (const { atom: other } of graph.adjacency[next]) if (other !== atom) prefixes.push({ locant: N_LOCANT, substituent: nameSubstituent(ctx, other, next) });
+        }
         continue;
       }
       prefixes.push({ locant: i + 1, substituent: nameSubstituent(ctx, next, atom) });
@@ -69,8 +74,8 @@ export function evaluate(ctx: NamingContext, skeleton: Skeleton, attachment: Att
  */
 function suffixGroup(ctx: NamingContext, skeleton: Skeleton, atom: number, next: number): PrincipalGroup | undefined {
   for (const group of ctx.principal) {
-    if (group.carbon === atom && group.atoms.includes(next)) return group;
-    if (suffixIncludesCarbon(group.kind) && skeleton.kind !== 'chain' && group.carbon === next) return group;
+    if (group.anchors.includes(atom) && group.atoms.includes(next)) return group;
+    if (suffixIncludesCarbon(group.kind) && skeleton.kind !== 'chain' && group.anchors[0] === next) return group;
   }
   return undefined;
 }

@@ -4,6 +4,7 @@ import { parentPart, renderUnit } from '../assembly/unit';
 import { isCarbonyl } from '../groups/scope';
 import { isAldehydeCarbon } from '../groups/principal';
 import { alkoxy } from './alkoxy';
+import { amino } from './amino';
 import type { Attachment, NamingContext, Skeleton, SubstituentName } from '../numbering/context';
 import { evaluate } from '../numbering/evaluate';
 import { bestCandidates, firstByName } from '../numbering/select';
@@ -30,6 +31,7 @@ function build(ctx: NamingContext, atom: number, from: number): SubstituentName 
   const { graph } = ctx;
   const group = ctx.groups.get(atom);
   if (group?.kind === 'ether') return alkoxy(ctx, atom, from, collectAtoms(ctx, atom, from));
+  if (group?.kind === 'amino') return amino(ctx, atom, from, collectAtoms(ctx, atom, from));
   if (group) return { name: group.kind, compound: false, enclose: false, atoms: group.atoms };
   if (graph.atoms[atom].element !== 'C') throw new NamingRefusal(`atom ${atom + 1} (${graph.atoms[atom].element}) cannot be named as a substituent yet`);
   if (isAldehydeCarbon(graph, atom)) {

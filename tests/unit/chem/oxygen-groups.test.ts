@@ -139,6 +139,6 @@ refusesExamples('refused whole rather than half-named', [
   ['CC(N)=O', /N atom/],
   ['COO', /not named yet/],
   ['OC1CCOCC1', /heterocycles/],
-  ['CC(O)CN', /N atom/],
+  ['CC(O)CNC(C)=O', /amide/],
   ['C[O-]', /ion|charged/],
 ]);
