@@ -1,5 +1,5 @@
 import { createBinding, syncYjsChangesToLexical, type Provider } from '@lexical/yjs';
-import { $getRoot, $isElementNode, createEditor, type LexicalNode, type SerializedEditorState } from 'lexical';
+import { $getRoot, $isElementNode, createEditor, type LexicalEditor, type LexicalNode, type SerializedEditorState } from 'lexical';
 import * as Y from 'yjs';
 import { $isStructureNode, pageNodes } from '../../shared/editor';
 import type { ProjectedStructure } from '../db/schema';
@@ -29,32 +29,73 @@ const silentProvider: Provider = {
 };
 
 /**
- * Reads a page's Yjs state the way a browser editor would (same binding, same node classes from
- * shared/editor) and returns its plain text, Lexical JSON and structures in document order.
- * The binding is one-way (Yjs → Lexical) on a throwaway copy of the state, so a projection can
- * never write anything back into the shared document.
+ * Keeps a headless Lexical editor in step with a page, the way a browser editor reads it (same
+ * binding, same node classes from shared/editor), so a projection costs a read of the editor
+ * state rather than a rebuild. The editor follows a private mirror of the document, never the
+ * shared one: the binding may tidy what it cannot map (text outside a paragraph, say), and such a
+ * change must not reach the page. Should the editor fail to follow, projections rebuild instead.
  */
+export class PageProjector {
+  private readonly mirror = new Y.Doc();
+  private readonly editor = createProjectionEditor();
+  private following = true;
+
+  constructor() {
+    const binding = createBinding(this.editor, silentProvider, 'page', this.mirror, new Map([['page', this.mirror]]));
+    binding.root.getSharedType().observeDeep((events) => {
+      if (!this.following) return;
+      try {
+        syncYjsChangesToLexical(binding, silentProvider, events as Y.YEvent<Y.XmlText>[], false);
+      } catch (error) {
+        console.error('[collab] projection editor stopped following the page:', error);
+        this.following = false;
+      }
+    });
+  }
+
+  /** Every change the page's document takes. */
+  apply(update: Uint8Array): void {
+    Y.applyUpdate(this.mirror, update);
+  }
+
+  project(): PageProjection {
+    if (!this.following) return projectPage(Y.encodeStateAsUpdate(this.mirror));
+    this.editor.update(noop, { discrete: true });
+    return read(this.editor);
+  }
+
+  destroy(): void {
+    this.following = false;
+    this.mirror.destroy();
+  }
+}
+
+/** A projection of a stored state on its own (a fresh editor and a throwaway document). */
 export function projectPage(state: Uint8Array): PageProjection {
-  const editor = createEditor({
+  const projector = new PageProjector();
+  projector.apply(state);
+  const projection = projector.project();
+  projector.destroy();
+  return projection;
+}
+
+function createProjectionEditor(): LexicalEditor {
+  return createEditor({
     namespace: 'page-projection',
     nodes: pageNodes,
     onError: (error) => {
       throw error;
     },
   });
-  const doc = new Y.Doc();
-  const binding = createBinding(editor, silentProvider, 'page', doc, new Map([['page', doc]]));
-  binding.root.getSharedType().observeDeep((events) => syncYjsChangesToLexical(binding, silentProvider, events, false));
-  Y.applyUpdate(doc, state);
-  editor.update(noop, { discrete: true });
+}
 
+function read(editor: LexicalEditor): PageProjection {
   const editorState = editor.getEditorState();
   const { text, structures } = editorState.read(() => {
     const found: ProjectedStructure[] = [];
     for (const node of $getRoot().getChildren()) collectStructures(node, found);
     return { text: $getRoot().getTextContent(), structures: found };
   });
-  doc.destroy();
   return { text, json: editorState.toJSON(), structures };
 }
 

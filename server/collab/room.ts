@@ -2,7 +2,7 @@ import { WebSocket } from 'ws';
 import * as awarenessProtocol from 'y-protocols/awareness';
 import * as Y from 'yjs';
 import type { Database } from '../db/client';
-import { projectPage, type PageProjection } from './projection';
+import { PageProjector, type PageProjection } from './projection';
 import {
   awarenessMessage,
   decodeMessage,
@@ -57,6 +57,7 @@ export const CLOSE_SHUTDOWN = 1001;
 export class Room {
   readonly doc = new Y.Doc();
   readonly awareness = new awarenessProtocol.Awareness(this.doc);
+  private readonly projector = new PageProjector();
   private readonly conns = new Map<WebSocket, Connection>();
   private tail: Promise<unknown> = Promise.resolve();
   private queue: (AcceptedUpdate & { conn: Connection })[] = [];
@@ -87,7 +88,10 @@ export class Room {
     this.uncompacted = stored.uncompacted;
     this.authorsSinceSnapshot = new Set(stored.authors);
     this.firstEditSinceSnapshotAt = stored.authors.length > 0 ? Date.now() : null;
-    this.doc.on('update', (update: Uint8Array, origin: unknown) => this.relay(update, origin));
+    this.doc.on('update', (update: Uint8Array, origin: unknown) => {
+      this.projector.apply(update);
+      this.relay(update, origin);
+    });
     this.awareness.on('update', (changes: AwarenessChanges, origin: unknown) => this.relayAwareness(changes, origin));
     this.announceLock();
     this.tickTimer = setInterval(() => this.tick(), timings.tickMs);
@@ -317,7 +321,7 @@ export class Room {
     const changed = this.projectionTimer !== null;
     if (this.projectionTimer) clearTimeout(this.projectionTimer);
     this.projectionTimer = null;
-    const projection = projectPage(Y.encodeStateAsUpdate(this.doc));
+    const projection = this.projector.project();
     await saveProjection(this.db, this.pageId, projection, { touchPage: changed });
     return projection;
   }
@@ -371,6 +375,7 @@ export class Room {
       .catch(logFailure('unloading a page'))
       .finally(() => {
         clearInterval(this.tickTimer);
+        this.projector.destroy();
         this.awareness.destroy();
         this.doc.destroy();
         this.onUnloaded();

@@ -14,12 +14,13 @@ import { pageNodes } from '../../shared/editor';
 import type { TestServer } from './server';
 
 /** ws takes headers in its constructor; y-websocket only passes (url, protocols). */
-export function webSocketWithCookie(cookie: string): typeof WebSocket {
-  return class CookieWebSocket extends WebSocket {
+export function webSocketWithCookie(cookie: string): typeof globalThis.WebSocket {
+  class CookieWebSocket extends WebSocket {
     constructor(url: string | URL, protocols?: string | string[]) {
       super(url, protocols, { headers: cookie ? { cookie } : {} });
     }
-  };
+  }
+  return CookieWebSocket as unknown as typeof globalThis.WebSocket;
 }
 
 export function collabUrl(baseUrl: string): string {
@@ -38,7 +39,7 @@ export interface CollabClient {
 export async function connectCollab(baseUrl: string, pageId: string, cookie: string): Promise<CollabClient> {
   const doc = new Y.Doc();
   const provider = new WebsocketProvider(collabUrl(baseUrl), pageId, doc, {
-    WebSocketPolyfill: webSocketWithCookie(cookie) as unknown as typeof globalThis.WebSocket,
+    WebSocketPolyfill: webSocketWithCookie(cookie),
     disableBc: true,
   });
   const client: CollabClient = {
