@@ -4,12 +4,13 @@ import os from 'node:os';
 import path from 'node:path';
 import { monitorEventLoopDelay } from 'node:perf_hooks';
 import { parseArgs } from 'node:util';
-import { createBinding, syncLexicalUpdateToYjs, type Provider } from '@lexical/yjs';
+import { createBinding, syncLexicalUpdateToYjs } from '@lexical/yjs';
 import { asc, eq, gt, and, sql } from 'drizzle-orm';
 import { $createParagraphNode, $createTextNode, $getRoot, createEditor } from 'lexical';
 import { WebSocket } from 'ws';
 import { WebsocketProvider } from 'y-websocket';
 import * as Y from 'yjs';
+import { silentProvider } from '../server/collab/projection';
 import { connectDatabase } from '../server/db/client';
 import { collabDocuments, collabUpdates, notebooks, pageContent } from '../server/db/schema';
 import { seedDemo } from '../server/seed/demo';
@@ -89,8 +90,7 @@ async function connect(url: string, pageId: string, cookie: string): Promise<{ d
 
 /** One paragraph per editor, written by a real Lexical binding so the page is what browsers write. */
 function seedParagraphs(doc: Y.Doc): void {
-  const noop = () => undefined;
-  const provider = { awareness: { getLocalState: () => null, getStates: () => new Map(), on: noop, off: noop, setLocalState: noop, setLocalStateField: noop }, connect: noop, disconnect: noop, on: noop, off: noop } as Provider;
+  const provider = silentProvider;
   const editor = createEditor({ namespace: 'bench', nodes: pageNodes, onError: (e) => { throw e; } });
   const binding = createBinding(editor, provider, 'page', doc, new Map([['page', doc]]));
   editor.registerUpdateListener(({ prevEditorState, editorState, dirtyElements, dirtyLeaves, normalizedNodes, tags }) =>

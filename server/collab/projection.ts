@@ -12,8 +12,8 @@ export interface PageProjection {
 
 const noop = () => undefined;
 
-/** The binding wants a provider for cursors and presence; a projection has neither. */
-const silentProvider: Provider = {
+/** The binding wants a provider for cursors and presence; a headless editor has neither. */
+export const silentProvider: Provider = {
   awareness: {
     getLocalState: () => null,
     getStates: () => new Map(),

@@ -1,10 +1,11 @@
-import { createBinding, syncLexicalUpdateToYjs, syncYjsChangesToLexical, type Provider } from '@lexical/yjs';
+import { createBinding, syncLexicalUpdateToYjs, syncYjsChangesToLexical } from '@lexical/yjs';
 import { createEditor, type LexicalEditor } from 'lexical';
 import http from 'node:http';
 import { WebSocket } from 'ws';
 import { WebsocketProvider } from 'y-websocket';
 import * as Y from 'yjs';
 import { attachCollab, type CollabTimings } from '../../server/collab';
+import { silentProvider } from '../../server/collab/projection';
 import { createApp } from '../../server/app';
 import type { AppDeps } from '../../server/context';
 import { createDeps } from '../../server/deps';
@@ -115,15 +116,6 @@ export function upgradeStatus(url: string, headers: Record<string, string>): Pro
     ws.on('error', (error) => reject(error));
   });
 }
-
-const noop = () => undefined;
-const silentProvider: Provider = {
-  awareness: { getLocalState: () => null, getStates: () => new Map(), on: noop, off: noop, setLocalState: noop, setLocalStateField: noop },
-  connect: noop,
-  disconnect: noop,
-  on: noop,
-  off: noop,
-};
 
 /**
  * A Lexical editor bound both ways to a client's document, with the page's node types: what it
