@@ -6,7 +6,7 @@ export function VerificationState({ report }: { report: VerifyReport }) {
   if (active.length === 0 && report.auditChain.intact) return null;
   if (report.intact) {
     return (
-      <p role="status" data-testid="record-state" className="rounded-md border border-reed-300 bg-reed-100 px-3 py-2 text-sm font-medium text-reed-700">
+      <p role="status" data-testid="record-state" className="rounded-md border border-tide-200 bg-tide-50 px-3 py-2 text-sm font-medium text-tide-700">
         Record intact: every signature matches the stored content, and the audit trail holds.
       </p>
     );
