@@ -11,6 +11,7 @@ import { NamingRefusal } from './refusal';
 import type { NameStyle } from './style';
 import { parentPart, renderUnit } from './unit';
 import { suffixWord } from './suffixes';
+import { esterAlkyl } from './principal-parent';
 import { checkScope } from './scope';
 import { compareDescriptorSequences, hasStereoMarks, placeDescriptors } from './stereo-descriptors';
 import { retainedBenzeneName } from './retained-benzenes';
@@ -130,6 +131,7 @@ function explain(ctx: NamingContext, e: Evaluated): Explanation {
       .sort((a, b) => a.locant - b.locant)
       .map((p) => ({ locant: locantText(p.locant), name: p.substituent.name, atoms: p.substituent.atoms })),
   };
+  if (e.principal[0]?.group.kind === 'ester') explanation.substituents.push({ locant: 'O', name: esterAlkyl(ctx, e).text, atoms: esterAlkyl(ctx, e).atoms });
   if (e.principal.length) {
     explanation.principalGroups = e.principal
       .map(({ locant, group }) => ({

@@ -9,13 +9,26 @@ import type { NameStyle } from './style';
 /**
  * The suffix word of a principal group: -ol (P-63.1.2), -one (P-64.2.1), -al for a CHO carbon
  * inside a chain and -carbaldehyde for a CHO group on a ring (P-66.6.1.1), -oic acid and
- * -carboxylic acid likewise for COOH (P-65.1.2).
+ * -carboxylic acid likewise for COOH (P-65.1.2), and the same pairs for esters (-oate,
+ * -carboxylate), acid halides (-oyl, -carbonyl + halide), amides and nitriles.
  */
 export function suffixWord(kind: SuffixKind, skeleton: Skeleton['kind']): string {
-  if (kind === 'al') return skeleton === 'chain' ? 'al' : 'carbaldehyde';
-  if (kind === 'acid') return skeleton === 'chain' ? 'oic acid' : 'carboxylic acid';
-  return kind;
+  const [chain, ring] = SUFFIXES[kind];
+  return skeleton === 'chain' ? chain : ring;
 }
+
+/** [in a chain, on a ring] for each kind (P-65.1.2, P-65.5.1, P-65.6.3.2, P-66.1.1, P-66.5.1, P-66.6.1). */
+const SUFFIXES: Record<SuffixKind, [string, string]> = {
+  acid: ['oic acid', 'carboxylic acid'],
+  ester: ['oate', 'carboxylate'],
+  acylHalide: ['oyl', 'carbonyl'],
+  amide: ['amide', 'carboxamide'],
+  nitrile: ['nitrile', 'carbonitrile'],
+  al: ['al', 'carbaldehyde'],
+  one: ['one', 'one'],
+  ol: ['ol', 'ol'],
+  amine: ['amine', 'amine'],
+};
 
 /**
  * P-31.1.4.2.4: with a principal group, locants go only where nothing else could be meant: one
@@ -33,33 +46,50 @@ export function principalLocantsOmitted(e: Evaluated): boolean {
 }
 
 /**
- * Retained names with principal groups (P-63.1.1, P-64.2.1.3, P-65.1.1.1, P-66.6.1.1.1; written
- * from memory): phenol, aniline (P-62.2.1.1.1), benzaldehyde and benzoic acid are preferred IUPAC names and take ring
- * substituents (4-chlorophenol, N-methylaniline); acetic acid is a preferred name that takes substituents on C-2
- * (chloroacetic acid, phenylacetic acid); formic acid, oxalic acid, formaldehyde and acetaldehyde
- * are preferred names of the bare compounds (substituted acetaldehydes are named only in the
- * traditional style, e.g. phenylacetaldehyde); acetone is a general name only (the preferred name
- * is propan-2-one).
+ * Retained names with principal groups (P-62.2.1.1.1, P-63.1.1, P-65.1.1.1, P-65.1.7.2, P-66.1.1.1,
+ * P-66.5.1.1, P-66.6.1.1.1; written from memory), as the stem the suffix would replace:
+ * on benzene phenol, aniline, benzoic acid, benzoate, benzoyl, benzamide, benzonitrile,
+ * benzaldehyde, all substitutable on the ring; the one- and two-carbon chains formic/acetic acid
+ * (formate, acetate, formyl/acetyl halides, formamide, acetamide, formonitrile, acetonitrile,
+ * formaldehyde, acetaldehyde) and oxalic acid (oxalate, oxalyl). Acetic acid and its esters and
+ * acid halides take substituents on C-2 (chloroacetic acid); for the acetaldehyde, acetonitrile
+ * and acetamide names the engine does not settle that and names substituted ones only in the
+ * traditional style. Acetone is a general name only (the preferred name is propan-2-one).
  */
+const BENZENE: Partial<Record<SuffixKind, string>> = {
+  ol: 'phenol', amine: 'aniline', acid: 'benzoic acid', ester: 'benzoate', acylHalide: 'benzoyl', amide: 'benzamide', nitrile: 'benzonitrile', al: 'benzaldehyde',
+};
+const ONE_CARBON: Partial<Record<SuffixKind, string>> = {
+  acid: 'formic acid', ester: 'formate', acylHalide: 'formyl', amide: 'formamide', nitrile: 'formonitrile', al: 'formaldehyde',
+};
+const TWO_CARBONS: Partial<Record<SuffixKind, string>> = {
+  acid: 'acetic acid', ester: 'acetate', acylHalide: 'acetyl', amide: 'acetamide', nitrile: 'acetonitrile', al: 'acetaldehyde',
+};
+const OXALIC: Partial<Record<SuffixKind, string>> = { acid: 'oxalic acid', ester: 'oxalate', acylHalide: 'oxalyl' };
+
 export function retainedPrincipalParent(e: Evaluated, style: NameStyle): string | null {
   const kind = e.principal[0].group.kind;
   const count = e.principal.length;
   const size = e.skeleton.atoms.length;
-  const bare = e.prefixes.length === 0 && e.multiple.length === 0;
-  if (e.skeleton.kind === 'benzene' && count === 1) return ({ ol: 'phenol', al: 'benzaldehyde', acid: 'benzoic acid', amine: 'aniline' } as Record<string, string>)[kind] ?? null;
-  if (e.skeleton.kind !== 'chain') return null;
-  if (size === 1 && (kind === 'al' || kind === 'acid')) {
-    if (!bare) throw new NamingRefusal('a substituted formaldehyde or formic acid is another class (acid, ester, amide…), not named here');
-    return kind === 'al' ? 'formaldehyde' : 'formic acid';
+  const carbonPrefixes = e.prefixes.filter((p) => p.locant !== N_LOCANT).length;
+  if (e.skeleton.kind === 'benzene') return count === 1 ? BENZENE[kind] ?? null : null;
+  if (e.skeleton.kind !== 'chain' || e.multiple.length > 0) return null;
+  if (size === 1 && ONE_CARBON[kind]) {
+    if (carbonPrefixes > 0) throw new NamingRefusal('a substituted one-carbon acid derivative is another class, not named here');
+    return ONE_CARBON[kind]!;
   }
-  if (size === 2 && kind === 'acid') return count === 2 ? 'oxalic acid' : 'acetic acid';
-  if (size === 2 && kind === 'al' && count === 1) {
-    if (!bare && style === 'preferred') {
-      throw new NamingRefusal('substituted acetaldehydes: the preferred name is not settled in this engine (the traditional style names them, e.g. phenylacetaldehyde)');
+  if (size === 2 && count === 2 && suffixIncludesCarbon(kind)) {
+    if (OXALIC[kind]) return OXALIC[kind]!;
+    throw new NamingRefusal('two-carbon diamides, dinitriles and dialdehydes: the retained-name status is not settled in this engine');
+  }
+  if (size === 2 && TWO_CARBONS[kind]) {
+    const acidLike = kind === 'acid' || kind === 'ester' || kind === 'acylHalide';
+    if (carbonPrefixes > 0 && !acidLike && (style === 'preferred' || e.prefixes.length > carbonPrefixes)) {
+      throw new NamingRefusal(`substituted ${TWO_CARBONS[kind]}: the preferred name is not settled in this engine (the traditional style names C-substituted ones, e.g. phenyl${TWO_CARBONS[kind]})`);
     }
-    return 'acetaldehyde';
+    return TWO_CARBONS[kind]!;
   }
-  if (style === 'traditional' && kind === 'one' && size === 3 && bare) return 'acetone';
+  if (style === 'traditional' && kind === 'one' && size === 3 && e.prefixes.length === 0) return 'acetone';
   return null;
 }
 

@@ -4,7 +4,8 @@ import { hydrideName, type FreeValenceKind } from './hydride';
 import { citePrefixes, joinPrefixes } from './prefixes';
 import { NamingRefusal } from './refusal';
 import { suffixIncludesCarbon } from '../groups/principal';
-import { principalLocantsOmitted, retainedPrincipalParent, withSuffix } from './suffixes';
+import { principalLocantsOmitted } from './suffixes';
+import { esterAlkyl, principalParent } from './principal-parent';
 
 const FREE_VALENCE: Record<1 | 2 | 3, FreeValenceKind> = { 1: 'yl', 2: 'ylidene', 3: 'ylidyne' };
 
@@ -27,32 +28,15 @@ function omitPrefixLocants(e: Evaluated): boolean {
 
 /** Name of a parent (no attachment) or a substituent group (with attachment), from its evaluation. */
 export function renderUnit(ctx: NamingContext, e: Evaluated): string {
-  return joinPrefixes(citePrefixes(e.prefixes, omitPrefixLocants(e))) + parentPart(e, ctx);
+  const name = joinPrefixes(citePrefixes(e.prefixes, omitPrefixLocants(e))) + parentPart(e, ctx);
+  return e.principal[0]?.group.kind === 'ester' ? `${esterAlkyl(ctx, e).text} ${name}` : name;
 }
 
 /** The parent hydride's own name with unsaturation and free-valence endings, without prefixes. */
 export function parentPart(e: Evaluated, ctx: NamingContext): string {
   if (e.closesRing) throw new NamingRefusal('a ring numbering that puts a multiple bond between the last and first ring atoms is not handled yet');
   const size = e.skeleton.atoms.length;
-  if (e.principal.length) {
-    const kind = e.principal[0].group.kind;
-    const twin = ({ al: 'formyl', acid: 'carboxy' } as Record<string, string>)[kind];
-    if (e.skeleton.kind === 'chain' && e.prefixes.some((p) => p.substituent.name === twin)) {
-      throw new NamingRefusal(`more than two ${kind === 'al' ? 'CHO' : 'COOH'} groups on one chain: names such as propane-1,2,3-tricarboxylic acid (P-65.1.2.2) are not built yet`);
-    }
-    // P-103.1: common α-amino acids have retained names (glycine, alanine…) that are not given here.
-    if (kind === 'acid' && e.skeleton.kind === 'chain' && e.prefixes.some((p) => p.locant === 2 && p.substituent.name === 'amino')) {
-      throw new NamingRefusal('α-amino acids have retained names (P-103) that the engine does not give yet');
-    }
-    if (kind === 'amine' && e.principal.length > 1 && e.prefixes.some((p) => p.locant === N_LOCANT)) {
-      throw new NamingRefusal('N-substituted polyamines need N1/N2 locants (P-62.2.1.1.2), which are not built yet');
-    }
-    const retained = retainedPrincipalParent(e, ctx.style);
-    if (retained) return retained;
-    const cite = !principalLocantsOmitted(e);
-    const hydride = e.skeleton.kind === 'benzene' ? 'benzene' : hydrideName({ size, ring: e.skeleton.kind === 'ring', multiple: e.multiple, freeValence: null, citeMultipleBondLocants: cite });
-    return withSuffix(e, hydride, cite);
-  }
+  if (e.principal.length) return principalParent(ctx, e);
   const fv = e.attachment ? { locant: e.freeValence[0], kind: FREE_VALENCE[e.attachment.order] } : null;
   let parent: string;
   if (e.skeleton.kind === 'benzene') {

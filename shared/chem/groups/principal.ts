@@ -2,15 +2,19 @@ import type { MolGraph } from '../graph/types';
 import type { PrefixGroup } from './scope';
 
 /** Characteristic groups the engine can express as a suffix, in descending seniority (P-41). */
-export type SuffixKind = 'acid' | 'al' | 'one' | 'ol' | 'amine';
-const SENIORITY: SuffixKind[] = ['acid', 'al', 'one', 'ol', 'amine'];
+export type SuffixKind = 'acid' | 'ester' | 'acylHalide' | 'amide' | 'nitrile' | 'al' | 'one' | 'ol' | 'amine';
+const SENIORITY: SuffixKind[] = ['acid', 'ester', 'acylHalide', 'amide', 'nitrile', 'al', 'one', 'ol', 'amine'];
+
+/** Suffix kinds of the groups keyed by their own carbon in the prefix-group map. */
+const CARBON_GROUPS: Record<string, SuffixKind> = { carboxy: 'acid', ester: 'ester', acylHalide: 'acylHalide', carbamoyl: 'amide', cyano: 'nitrile' };
 
 /**
  * Groups whose suffix includes a carbon atom: inside a chain that carbon is a chain atom (-oic
- * acid, -al); on a ring it hangs outside (-carboxylic acid, -carbaldehyde), P-65.1.2, P-66.6.1.
+ * acid, -oate, -oyl halide, -amide, -nitrile, -al); on a ring it hangs outside (-carboxylic acid,
+ * -carboxylate, -carbonyl halide, -carboxamide, -carbonitrile, -carbaldehyde), P-65, P-66.
  */
 export function suffixIncludesCarbon(kind: SuffixKind): boolean {
-  return kind === 'acid' || kind === 'al';
+  return kind !== 'one' && kind !== 'ol' && kind !== 'amine';
 }
 
 /**
@@ -33,14 +37,15 @@ export function isAldehydeCarbon(graph: MolGraph, c: number): boolean {
 }
 
 /**
- * The principal characteristic group (P-41 seniority of classes: acids > aldehydes > ketones >
- * alcohols > amines) and every occurrence of it; an empty list when the molecule has none of them.
+ * The principal characteristic group (P-41 seniority of classes: acids > esters > acid halides >
+ * amides > nitriles > aldehydes > ketones > alcohols > amines) and every occurrence of it; an empty list when the molecule has none of them.
  */
 export function findPrincipalGroups(graph: MolGraph, groups: Map<number, PrefixGroup>): PrincipalGroup[] {
   const found: PrincipalGroup[] = [];
   for (const group of groups.values()) {
-    if (group.kind === 'carboxy') {
-      found.push({ kind: 'acid', anchors: [group.atom], atoms: group.atoms.filter((a) => a !== group.atom) });
+    const carbonKind = CARBON_GROUPS[group.kind];
+    if (carbonKind) {
+      found.push({ kind: carbonKind, anchors: [group.atom], atoms: group.atoms.filter((a) => a !== group.atom) });
       continue;
     }
     if (group.kind === 'amino') {

@@ -1,13 +1,14 @@
 import type { MolGraph } from '../graph/types';
 import { NamingRefusal } from '../assembly/refusal';
 
-export type PrefixGroupKind = 'fluoro' | 'chloro' | 'bromo' | 'iodo' | 'nitro' | 'hydroxy' | 'oxo' | 'ether' | 'carboxy' | 'amino';
+export type PrefixGroupKind = 'fluoro' | 'chloro' | 'bromo' | 'iodo' | 'nitro' | 'hydroxy' | 'oxo' | 'ether' | 'carboxy' | 'amino' | 'cyano' | 'carbamoyl' | 'ester' | 'acylHalide';
 
 /**
  * A non-carbon group hanging from a carbon atom, as the engine cites it when it is not the
  * principal characteristic group: halogen (P-61.3), nitro (P-61.5), hydroxy (P-63.1.3), oxo
- * (P-64.1.2), carboxy (P-65.1.5.1: the whole COOH, keyed by its carbon), amino (P-62.2.1.1,
- * with its own N-substituents) prefixes; 'ether' marks a bridging oxygen named as an alkoxy or aryloxy prefix
+ * (P-64.1.2), amino (P-62.2.1.1, with its own N-substituents) prefixes; groups built on one
+ * carbon are keyed by that carbon: carboxy (P-65.1.5.1), cyano (P-66.5.1.2), carbamoyl (P-66.1.4.1),
+ * and the ester and acid-halide groups, which are named only as principal groups. 'ether' marks a bridging oxygen named as an alkoxy or aryloxy prefix
  * (P-63.2.2.2) from either side.
  */
 export interface PrefixGroup {
@@ -27,10 +28,10 @@ export function findPrefixGroups(graph: MolGraph): Map<number, PrefixGroup> {
   const groups = new Map<number, PrefixGroup>();
   const claimed = new Set<number>();
   for (const atom of graph.atoms) {
-    const acid = atom.element === 'C' ? carboxyGroup(graph, atom.index) : null;
-    if (acid) {
-      groups.set(atom.index, acid);
-      for (const a of acid.atoms) if (a !== atom.index) claimed.add(a);
+    const group = atom.element === 'C' ? acylGroup(graph, atom.index) ?? cyanoGroup(graph, atom.index) : null;
+    if (group) {
+      groups.set(atom.index, group);
+      for (const a of group.atoms) if (a !== atom.index) claimed.add(a);
     }
   }
   for (const atom of graph.atoms) {
@@ -83,14 +84,44 @@ function nitroGroup(graph: MolGraph, n: number): PrefixGroup | null {
   return { kind: 'nitro', atom: n, atoms: [n, ...oxygens.map((e) => e.atom)] };
 }
 
-/** C(=O)OH on a carbon whose remaining neighbour, if any, is carbon. */
-function carboxyGroup(graph: MolGraph, c: number): PrefixGroup | null {
+const HALIDE = new Set(['F', 'Cl', 'Br', 'I']);
+
+/**
+ * A carbonyl carbon whose remaining neighbour, if any, is carbon, with one more group: OH (carboxy),
+ * O-C (ester, the O and its carbon not being part of an anhydride), N with only carbons and
+ * hydrogens otherwise (amide), or a halogen (acid halide). The group's atoms stop at the ester
+ * oxygen and the amide nitrogen: the alkyl and N-groups are named on their own.
+ */
+function acylGroup(graph: MolGraph, c: number): PrefixGroup | null {
   const edges = graph.adjacency[c];
   const oxo = edges.find((e) => graph.atoms[e.atom].element === 'O' && graph.bonds[e.bond].order === 2 && graph.atoms[e.atom].charge === 0);
-  const hydroxy = edges.find((e) => graph.atoms[e.atom].element === 'O' && graph.bonds[e.bond].order === 1 && graph.atoms[e.atom].hydrogens === 1 && graph.atoms[e.atom].charge === 0 && graph.adjacency[e.atom].length === 1);
-  if (!oxo || !hydroxy) return null;
-  if (edges.some((e) => e !== oxo && e !== hydroxy && graph.atoms[e.atom].element !== 'C')) return null;
-  return { kind: 'carboxy', atom: c, atoms: [c, oxo.atom, hydroxy.atom] };
+  if (!oxo) return null;
+  const rest = edges.filter((e) => e !== oxo && graph.atoms[e.atom].element !== 'C');
+  if (rest.length !== 1 || graph.bonds[rest[0].bond].order !== 1) return null;
+  const x = rest[0].atom;
+  const atom = graph.atoms[x];
+  if (atom.charge !== 0 || edges.filter((e) => graph.atoms[e.atom].element === 'C').length + graph.atoms[c].hydrogens !== 1) return null;
+  const others = graph.adjacency[x].filter((e) => e.atom !== c);
+  const atoms = [c, oxo.atom, x];
+  if (atom.element === 'O' && others.length === 0 && atom.hydrogens === 1) return { kind: 'carboxy', atom: c, atoms };
+  if (atom.element === 'O' && others.length === 1 && atom.hydrogens === 0 && graph.atoms[others[0].atom].element === 'C' && !isCarbonyl(graph, others[0].atom)) {
+    return { kind: 'ester', atom: c, atoms };
+  }
+  const nitrogenOk = others.every((e) => graph.atoms[e.atom].element === 'C' && graph.bonds[e.bond].order === 1 && !isCarbonyl(graph, e.atom));
+  if (atom.element === 'N' && nitrogenOk && others.length + atom.hydrogens === 2) return { kind: 'carbamoyl', atom: c, atoms };
+  if (HALIDE.has(atom.element) && others.length === 0) return { kind: 'acylHalide', atom: c, atoms };
+  return null;
+}
+
+/** C#N on a carbon whose other neighbour, if any, is carbon (HCN has a hydrogen there). */
+function cyanoGroup(graph: MolGraph, c: number): PrefixGroup | null {
+  const edges = graph.adjacency[c];
+  const triple = edges.find((e) => graph.atoms[e.atom].element === 'N' && graph.bonds[e.bond].order === 3);
+  if (!triple) return null;
+  const n = graph.atoms[triple.atom];
+  if (n.charge !== 0 || graph.adjacency[triple.atom].length !== 1) return null;
+  if (edges.some((e) => e !== triple && graph.atoms[e.atom].element !== 'C')) return null;
+  return { kind: 'cyano', atom: c, atoms: [c, triple.atom] };
 }
 
 /**

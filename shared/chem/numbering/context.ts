@@ -1,7 +1,7 @@
 import type { MolGraph } from '../graph/types';
 import type { RingSystems } from '../graph/rings';
 import type { PrefixGroup } from '../groups/scope';
-import type { PrincipalGroup } from '../groups/principal';
+import { suffixIncludesCarbon, type PrincipalGroup } from '../groups/principal';
 import type { NameStyle } from '../assembly/style';
 
 /** A named substituent prefix (P-29, P-61), independent of the parent's numbering. */
@@ -56,6 +56,11 @@ export interface Prefix {
   substituent: SubstituentName;
 }
 
+/**
+ * Acyclic carbons can be chain atoms, except the carbon of a COOH, CN, CONH2… group cited as a
+ * prefix (carboxy, cyano, carbamoyl include their carbon); as a principal group it is a chain atom.
+ */
 export function isChainCarbon(ctx: NamingContext, atom: number): boolean {
-  return ctx.graph.atoms[atom].element === 'C' && ctx.rings.systemOf[atom] < 0;
+  if (ctx.graph.atoms[atom].element !== 'C' || ctx.rings.systemOf[atom] >= 0) return false;
+  return !ctx.groups.has(atom) || ctx.principal.some((g) => g.anchors[0] === atom && suffixIncludesCarbon(g.kind));
 }

@@ -44,11 +44,9 @@ export function evaluate(ctx: NamingContext, skeleton: Skeleton, attachment: Att
       const suffix = attachment ? undefined : suffixGroup(ctx, skeleton, atom, next);
       if (suffix) {
         // A group with two atoms on the carbon (COOH) is one suffix.
-        if (!principal.some((p) => p.group === suffix)) principal.push({ locant: i + 1, group: suffix });
-        // P-62.2.1.1: the other groups on an amine nitrogen are N-prefixes (locant N, kept as 0).
-        if (suffix.kind === 'amine') {
-          for (const { atom: other } of graph.adjacency[next]) if (other !== atom) prefixes.push({ locant: N_LOCANT, substituent: nameSubstituent(ctx, other, next) });
-        }
+        if (principal.some((p) => p.group === suffix)) continue;
+        principal.push({ locant: i + 1, group: suffix });
+        prefixes.push(...nPrefixes(ctx, suffix, atom));
         continue;
       }
       prefixes.push({ locant: i + 1, substituent: nameSubstituent(ctx, next, atom) });
@@ -64,6 +62,18 @@ export function evaluate(ctx: NamingContext, skeleton: Skeleton, attachment: Att
     citation: null,
   };
   return { skeleton, attachment, freeValence, multiple, prefixes, principal, closesRing, keys };
+}
+
+/**
+ * P-62.2.1.1, P-66.1.1.4: the carbon groups on the nitrogen of an amine or amide (other than
+ * the parent's own carbon) are N-prefixes, locant N kept as 0. Each group is seen once, from the
+ * first of its atoms met.
+ */
+function nPrefixes(ctx: NamingContext, group: PrincipalGroup, skeletonAtom: number): Prefix[] {
+  if (group.kind !== 'amine' && group.kind !== 'amide') return [];
+  const nitrogen = group.atoms.find((a) => ctx.graph.atoms[a].element === 'N')!;
+  const bondedTo = group.kind === 'amine' ? skeletonAtom : group.anchors[0];
+  return ctx.graph.adjacency[nitrogen].filter((e) => e.atom !== bondedTo).map((e) => ({ locant: N_LOCANT, substituent: nameSubstituent(ctx, e.atom, nitrogen) }));
 }
 
 /**

@@ -32,7 +32,13 @@ function build(ctx: NamingContext, atom: number, from: number): SubstituentName 
   const group = ctx.groups.get(atom);
   if (group?.kind === 'ether') return alkoxy(ctx, atom, from, collectAtoms(ctx, atom, from));
   if (group?.kind === 'amino') return amino(ctx, atom, from, collectAtoms(ctx, atom, from));
-  if (group) return { name: group.kind, compound: false, enclose: false, atoms: group.atoms };
+  if (group?.kind === 'ester' || group?.kind === 'acylHalide') {
+    throw new NamingRefusal(`the ${group.kind === 'ester' ? 'ester' : 'acid halide'} group at atom ${atom + 1} would be a prefix (alkoxycarbonyl, acyloxy, halocarbonyl), which is not named yet`);
+  }
+  if (group?.kind === 'carbamoyl' && graph.atoms[group.atoms[2]].hydrogens !== 2) {
+    throw new NamingRefusal(`the N-substituted amide group at atom ${atom + 1} would be a prefix, which is not named yet`);
+  }
+  if (group) return { name: group.kind, compound: false, enclose: false, atoms: collectAtoms(ctx, atom, from) };
   if (graph.atoms[atom].element !== 'C') throw new NamingRefusal(`atom ${atom + 1} (${graph.atoms[atom].element}) cannot be named as a substituent yet`);
   if (isAldehydeCarbon(graph, atom)) {
     // P-66.6.1.2: -CHO as a prefix is formyl (its carbon cannot join a chain here: it has no other carbon).

@@ -43,8 +43,8 @@ namesExamples('P-65.1 carboxylic acids', [
 
 refusesExamples('refused whole', [
   ['OC(=O)CC(CC(=O)O)C(=O)O', /tricarboxylic/],
-  ['CC(=O)OC', /ester/],
+  ['CC(=O)OC(C)=O', /anhydride/],
   ['OC(=O)CC(=O)OC', /ester/],
   ['CC(=O)[O-]', /ion|charged/],
-  ['OC(=O)C#N', /N atom/],
+  ['OC(=O)C#N', /one-carbon/],
 ]);

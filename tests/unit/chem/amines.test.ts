@@ -54,5 +54,5 @@ refusesExamples('refused whole', [
   ['CC(=N)C', /N atom/],
   ['C[NH3+]', /ion|charged/],
   ['CNO', /N atom/],
-  ['CC(=O)NC', /amide/],
+  ['CC(=O)NC(C)=O', /amide/],
 ]);
