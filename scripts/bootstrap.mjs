@@ -60,10 +60,15 @@ if (!npmPackagesCurrent()) {
 if (!hasPostgresServer()) aptInstall('postgresql', 'the database server');
 if (mode === 'test' && !fs.existsSync('/usr/bin/chromium')) aptInstall('chromium', 'for the browser tests');
 
-const tsx = path.join(root, 'node_modules', '.bin', 'tsx');
 // The locked AWS SDK supports this Node.js; its notice about future releases is noise at every start.
 const env = { AWS_SDK_JS_NODE_VERSION_SUPPORT_WARNING_DISABLED: 'true', ...process.env };
-const child = spawn(tsx, [path.join(root, 'scripts', `${mode}.ts`), ...passThrough], { cwd: root, stdio: 'inherit', env });
+// `node --import tsx` rather than the tsx command: no wrapper process in between, so signals reach
+// the script itself and its clean-up (stopping PostgreSQL) always runs.
+const child = spawn(process.execPath, ['--import', 'tsx', path.join(root, 'scripts', `${mode}.ts`), ...passThrough], {
+  cwd: root,
+  stdio: 'inherit',
+  env,
+});
 // The child shares our terminal, so Ctrl-C reaches it directly; SIGTERM is passed on explicitly.
 process.on('SIGINT', () => undefined);
 process.on('SIGTERM', () => child.kill('SIGTERM'));

@@ -48,7 +48,7 @@ async function main() {
   }
 
   const publicUrl = `http://127.0.0.1:${port}`;
-  const server = spawn(path.join(root, 'node_modules', '.bin', 'tsx'), [path.join(root, 'server', 'index.ts')], {
+  const server = spawn(process.execPath, ['--import', 'tsx', path.join(root, 'server', 'index.ts')], {
     cwd: root,
     stdio: ['ignore', 'inherit', 'inherit'],
     env: { ...process.env, ...stack.env, PORT: port, HOST: '127.0.0.1', PUBLIC_URL: process.env.PUBLIC_URL ?? publicUrl, NODE_ENV: 'production' },
