@@ -38,8 +38,17 @@ function build(ctx: NamingContext, atom: number, from: number): SubstituentName 
   if (group?.kind === 'carbamoyl' && graph.atoms[group.atoms[2]].hydrogens !== 2) {
     throw new NamingRefusal(`the N-substituted amide group at atom ${atom + 1} would be a prefix, which is not named yet`);
   }
+  // On a ring the CONH2 carbon cannot join the parent: carbamoyl. On a chain, whether it is
+  // carbamoyl or 'amino…oxo' with the carbon in the chain (P-66.1.4) is not settled here.
+  if (group?.kind === 'carbamoyl' && ctx.rings.systemOf[from] < 0) {
+    throw new NamingRefusal(`the amide group at atom ${atom + 1} on a chain would be a prefix (carbamoyl or amino…oxo, P-66.1.4), which is not named yet`);
+  }
   if (group) return { name: group.kind, compound: false, enclose: false, atoms: collectAtoms(ctx, atom, from) };
-  if (graph.atoms[atom].element !== 'C') throw new NamingRefusal(`atom ${atom + 1} (${graph.atoms[atom].element}) cannot be named as a substituent yet`);
+  if (graph.atoms[atom].element !== 'C') {
+    const owner = [...ctx.groups.values()].find((g) => g.atoms.includes(atom));
+    if (owner) throw new NamingRefusal(`atom ${atom + 1} (${graph.atoms[atom].element}) belongs to the ${owner.kind} group on atom ${owner.atom + 1}; seen from this side it would be an acyloxy or acylamino prefix, which is not named yet`);
+    throw new NamingRefusal(`atom ${atom + 1} (${graph.atoms[atom].element}) cannot be named as a substituent yet`);
+  }
   if (isAldehydeCarbon(graph, atom)) {
     // P-66.6.1.2: -CHO as a prefix is formyl (its carbon cannot join a chain here: it has no other carbon).
     if (graph.adjacency[atom].every((e) => e.atom === from || graph.atoms[e.atom].element === 'O')) return { name: 'formyl', compound: false, enclose: false, atoms: collectAtoms(ctx, atom, from) };
