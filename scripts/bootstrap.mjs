@@ -69,7 +69,8 @@ const child = spawn(process.execPath, ['--import', 'tsx', path.join(root, 'scrip
   stdio: 'inherit',
   env,
 });
-// The child shares our terminal, so Ctrl-C reaches it directly; SIGTERM is passed on explicitly.
-process.on('SIGINT', () => undefined);
+// Ctrl-C in a terminal reaches the child directly too; passing signals on covers a lone `kill`.
+// The child's shutdown is idempotent, so receiving one twice is harmless.
+process.on('SIGINT', () => child.kill('SIGINT'));
 process.on('SIGTERM', () => child.kill('SIGTERM'));
 child.on('exit', (code, signal) => process.exit(code ?? (signal ? 1 : 0)));
