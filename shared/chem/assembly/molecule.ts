@@ -46,6 +46,7 @@ function nameOrRefuse(graph: MolGraph, style: NameStyle): Naming {
   const ctx: NamingContext = { graph, style, rings, groups, principal: findPrincipalGroups(graph, groups), substituents: new Map() };
   const candidates = parentCandidates(ctx).map((s) => evaluate(ctx, s, null));
   const survivors = bestCandidates(candidates);
+  refuseMultiplicativeCases(survivors);
   const { name } = firstByName(survivors, (e) => renderUnit(ctx, e));
   const tied = survivors.filter((e) => renderUnit(ctx, e) === name);
   const retained = retainedBenzeneName(tied[0], style);
@@ -106,6 +107,22 @@ function refuseRingAssemblies(graph: MolGraph, rings: RingSystems): void {
       throw new NamingRefusal('two identical rings joined directly form a ring assembly (biphenyl, bi(cyclohexane), P-28), which is not named yet');
     }
   }
+}
+
+/**
+ * P-15.3, P-51.3: identical parents joined through a substituent group (HO-CH2CH2-O-CH2CH2-OH,
+ * ClCH2CH2-O-CH2CH2Cl) take multiplicative names in preferred names (2,2'-oxydi(ethan-1-ol)),
+ * which are not built. Equally senior chains that share no atom are such a case unless they share
+ * their principal group (N-ethylethanamine) or carry nothing but the link (ethoxyethane).
+ */
+function refuseMultiplicativeCases(survivors: Evaluated[]): void {
+  const first = survivors[0];
+  const atoms = new Set(first.skeleton.atoms);
+  const apart = survivors.find((e) => !e.skeleton.atoms.some((a) => atoms.has(a)));
+  if (!apart) return;
+  const shared = first.principal.length > 0 && first.principal.every((p) => apart.principal.some((q) => q.group === p.group));
+  const bare = first.principal.length === 0 && survivors.every((e) => e.prefixes.length === 1);
+  if (!shared && !bare) throw new NamingRefusal('identical parents joined through a linking group: multiplicative names (P-15.3) are not built yet');
 }
 
 function evaluateMultipleBonds(ctx: NamingContext, skeleton: Skeleton): number {

@@ -46,7 +46,7 @@ namesExamples('P-62 amines (preferred names)', [
 
 refusesExamples('refused whole', [
   ['CNCCNC', /N1\/N2/],
-  ['NCCNCCN', /N1\/N2/],
+  ['NCCNCCN', /N1\/N2|multiplicative/],
   ['CN(CC)CCO', /two different groups/],
   ['OC(=O)CN', /amino acids/],
   ['CC(N)C(=O)O', /amino acids/],

@@ -90,7 +90,8 @@ const preferred: [string, string, string][] = [
   ['ClCCOc1ccccc1', '(2-chloroethoxy)benzene', 'P-63.2.2.2'],
   ['CC(C)(C)OC', '2-methoxy-2-methylpropane', 'P-63.2.2.1'],
   ['COCCO', '2-methoxyethan-1-ol', 'P-63.2.2.2 with P-63.1.2'],
-  ['COCCOCCOC', '1-methoxy-2-(2-methoxyethoxy)ethane', 'P-63.2.2.2'],
+  ['COCCOC', '1,2-dimethoxyethane', 'P-63.2.2.2'],
+  ['CC(C)OC(C)C', '2-[(propan-2-yl)oxy]propane', 'P-63.2.2.2'],
   ['COc1ccc(C=O)cc1', '4-methoxybenzaldehyde', 'P-63.2.2.2'],
   ['Oc1ccc(OC2CCCCC2)cc1', '4-(cyclohexyloxy)phenol', 'P-63.2.2.2'],
   ['Clc1ccc(OC2CCCCCC2)cc1', '(4-chlorophenoxy)cycloheptane', 'P-63.2.2.2 phenoxy, P-44.2 larger ring'],
@@ -130,6 +131,9 @@ refusesExamples('refused whole rather than half-named', [
   ['O=CC(C=O)CC=O', /tricarbox|more than two CHO/],
   ['CC(=O)C1CCC(=O)CC1', /acyl/],
   ['c1ccccc1Oc1ccccc1', /multiplicative/],
+  ['OCCOCCO', /multiplicative/], // P-15.3: 2,2'-oxydi(ethan-1-ol)
+  ['ClCCOCCCl', /multiplicative/],
+  ['COCCOCCOC', /multiplicative/],
   ['Oc1ccc(cc1)-c1ccccc1', /ring assembly/],
   ['OC1CCC(CC1)C1CCCCC1', /ring assembly/],
   ['C=C=O', /ketene/],
@@ -137,6 +141,6 @@ refusesExamples('refused whole rather than half-named', [
   ['CC(=O)OC(C)=O', /anhydride/],
   ['COO', /not named yet/],
   ['OC1CCOCC1', /heterocycles/],
-  ['CC(=O)OCC(O)COC(C)=O', /polyols/],
+  ['CC(=O)OCC(O)COC(C)=O', /polyols|multiplicative/],
   ['C[O-]', /ion|charged/],
 ]);
