@@ -56,7 +56,17 @@ function nameOrRefuse(graph: MolGraph, style: NameStyle): Naming {
   const placed = tied.map((e) => ({ e, descriptors: placeDescriptors(graph, e) }));
   placed.sort((x, y) => compareDescriptorSequences(x.descriptors.ranked, y.descriptors.ranked));
   const chosen = placed[0];
-  return { ok: true, name: chosen.descriptors.prefix + name, explanation: explain(ctx, chosen.e) };
+  return { ok: true, name: withDescriptors(chosen.e, chosen.descriptors.prefix, name), explanation: explain(ctx, chosen.e) };
+}
+
+/**
+ * P-93.5: descriptors go in front of the part of the name they describe; in an ester name that is
+ * the acid component, after the alkyl word: ethyl (2S)-2-chloropropanoate.
+ */
+function withDescriptors(e: Evaluated, prefix: string, name: string): string {
+  if (!prefix || e.principal[0]?.group.kind !== 'ester') return prefix + name;
+  const space = name.indexOf(' ');
+  return `${name.slice(0, space + 1)}${prefix}${name.slice(space + 1)}`;
 }
 
 /**

@@ -25,6 +25,9 @@ const molecules = [
   'C[C@@H](Cl)CC', 'C[C@H](Cl)CC', 'C[C@H](Cl)[C@@H](Br)C', 'C[C@@H](Cl)[C@@H](Br)C', 'C/C=C/C', 'C/C=C\\C',
   'C/C=C/C[C@H](Cl)C', 'CC/C=C(/C)CC', 'Cl/C=C/Cl', 'Cl/C=C\\Cl', 'F[C@](Cl)(Br)I', 'C[C@@H]1CCCC[C@H]1C',
   'C[C@@H]1CCC[C@H](Cl)C1', 'CC[C@@H](C)[C@H](C)CC(C)C', 'C=C[C@H](Br)CC',
+  // With principal characteristic groups on the parent (P-93.5 with P-63, P-64, P-65, P-62).
+  'C[C@@H](O)CC', 'C[C@@H](O)C(=O)O', 'OC/C=C/CO', 'C/C=C/C=O', 'CCOC(=O)[C@H](C)O', 'C[C@H](Cl)C(=O)OCC',
+  'O[C@@H]1CCCC[C@H]1N', 'C[C@@H](O)CC(=O)C', 'OC(=O)/C=C\\C(=O)O', 'C[C@H](N)CC', 'CC(=O)/C=C/c1ccccc1',
 ];
 
 describe('stereodescriptors placed on the parent', () => {
@@ -32,7 +35,8 @@ describe('stereodescriptors placed on the parent', () => {
     const { naming } = describeSync({ smiles });
     if (!naming.ok) throw new Error(naming.reason);
     const reference = await rdkitLabels(smiles);
-    const match = /^\(([^)]*)\)-/.exec(naming.name);
+    // At the front, or after the alkyl word of an ester (ethyl (2S)-2-chloropropanoate).
+    const match = /(?:^|\s)\((\d*[RSEZrs](?:,\d*[RSEZrs])*)\)-/.exec(naming.name);
     expect(match, naming.name).not.toBeNull();
     const parent = naming.explanation.parent.atoms;
     const descriptors = match![1].split(',');
@@ -54,6 +58,9 @@ describe('stereodescriptors placed on the parent', () => {
     ['C/C=C/C', '(2E)-but-2-ene'],
     ['C/C=C\\C', '(2Z)-but-2-ene'],
     ['Cl/C=C/Cl', '(E)-1,2-dichloroethene'],
+    ['C[C@H](Cl)C(=O)OCC', 'ethyl (2S)-2-chloropropanoate'], // P-93.5: before the acid component
+    ['C[C@@H](Cl)C(=O)Cl', '(2R)-2-chloropropanoyl chloride'],
+    ['C[C@@H](O)CC', '(2R)-butan-2-ol'],
     ['C[C@H](C)CC', '2-methylbutane'], // a mark on a non-stereogenic centre gives no descriptor
   ])('%s → %s', (smiles, expected) => {
     const { naming } = describeSync({ smiles });
