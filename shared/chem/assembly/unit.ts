@@ -26,9 +26,26 @@ function omitPrefixLocants(e: Evaluated): boolean {
   return e.multiple.length === 0;
 }
 
+const ATOMIC_PREFIXES = new Set(['fluoro', 'chloro', 'bromo', 'iodo', 'nitro']);
+
+/**
+ * Without locants, different prefixes such as chloro and phenyl would run together
+ * ('chlorophenylacetic acid' reads as (chlorophenyl)); the 2013 rules separate them with
+ * parentheses (P-16.5.1.3: chloro(phenyl)acetic acid, cyclohexyl(phenyl)methanone), which the
+ * engine does not write yet. Halogen and nitro prefixes alone (bromochlorofluoromethane) stay.
+ */
+function refuseRunTogetherPrefixes(e: Evaluated): void {
+  const names = new Set(e.prefixes.map((p) => p.substituent.name));
+  if (names.size > 1 && [...names].some((n) => !ATOMIC_PREFIXES.has(n))) {
+    throw new NamingRefusal(`prefixes ${[...names].join(', ')} without locants need separating parentheses (P-16.5.1.3), which are not written yet`);
+  }
+}
+
 /** Name of a parent (no attachment) or a substituent group (with attachment), from its evaluation. */
 export function renderUnit(ctx: NamingContext, e: Evaluated): string {
-  const name = joinPrefixes(citePrefixes(e.prefixes, omitPrefixLocants(e))) + parentPart(e, ctx);
+  const omit = omitPrefixLocants(e);
+  if (omit) refuseRunTogetherPrefixes(e);
+  const name = joinPrefixes(citePrefixes(e.prefixes, omit)) + parentPart(e, ctx);
   return e.principal[0]?.group.kind === 'ester' ? `${esterAlkyl(ctx, e).text} ${name}` : name;
 }
 

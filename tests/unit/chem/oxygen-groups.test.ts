@@ -132,6 +132,9 @@ refusesExamples('refused whole rather than half-named', [
   ['CC(=O)C1CCC(=O)CC1', /acyl/],
   ['c1ccccc1Oc1ccccc1', /multiplicative/],
   ['OCCOCCO', /multiplicative/], // P-15.3: 2,2'-oxydi(ethan-1-ol)
+  ['O=C(C1CCCCC1)c1ccccc1', /parentheses/], // cyclohexyl(phenyl)methanone, P-16.5.1.3
+  ['ClC(c1ccccc1)C(=O)O', /parentheses/], // chloro(phenyl)acetic acid
+  ['ClC(C1CCCCC1)c1ccccc1', /parentheses/], // [chloro(cyclohexyl)methyl]benzene
   ['ClCCOCCCl', /multiplicative/],
   ['COCCOCCOC', /multiplicative/],
   ['Oc1ccc(cc1)-c1ccccc1', /ring assembly/],
