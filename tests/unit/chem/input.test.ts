@@ -55,7 +55,7 @@ describe('bad input gives typed errors that say where and what', () => {
 describe('molfiles (V2000 and V3000)', () => {
   it('reads both versions written by RDKit and names them like the SMILES', async () => {
     const rd = await rdkit();
-    for (const smiles of ['CC(C)CC(C)(C)C', 'Clc1ccc(Br)cc1', 'C=CC1CCCCC1', 'C[N+](=O)[O-]']) {
+    for (const smiles of ['CC(C)CC(C)(C)C', 'Clc1ccc(Br)cc1', 'C=CC1CCCCC1', 'C[N+](=O)[O-]', 'OC(=O)c1ccc(N)cc1', 'CCOC(C)=O', 'CC(=O)Nc1ccccc1', 'N#CCC(O)C', 'O=Cc1ccccc1O', 'CN(C)CCOc1ccccc1']) {
       const mol = rd.get_mol(smiles)!;
       const expected = describeSync({ smiles });
       for (const molfile of [mol.get_molblock(), mol.get_v3Kmolblock()]) {
