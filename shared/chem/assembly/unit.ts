@@ -32,11 +32,15 @@ const ATOMIC_PREFIXES = new Set(['fluoro', 'chloro', 'bromo', 'iodo', 'nitro']);
  * Without locants, different prefixes such as chloro and phenyl would run together
  * ('chlorophenylacetic acid' reads as (chlorophenyl)); the 2013 rules separate them with
  * parentheses (P-16.5.1.3: chloro(phenyl)acetic acid, cyclohexyl(phenyl)methanone), which the
- * engine does not write yet. Halogen and nitro prefixes alone (bromochlorofluoromethane) stay.
+ * engine does not write yet. Prefixes already in enclosing marks after the first
+ * ((4-chlorophenyl)(4-hydroxyphenyl)methanone) and halogen and nitro prefixes alone
+ * (bromochlorofluoromethane) are unambiguous.
  */
-function refuseRunTogetherPrefixes(e: Evaluated): void {
+export function refuseRunTogetherPrefixes(e: Evaluated): void {
   const names = new Set(e.prefixes.map((p) => p.substituent.name));
-  if (names.size > 1 && [...names].some((n) => !ATOMIC_PREFIXES.has(n))) {
+  if (names.size < 2 || [...names].every((n) => ATOMIC_PREFIXES.has(n))) return;
+  const cited = citePrefixes(e.prefixes, true);
+  if (cited.slice(1).some((c) => !/^[a-z]*[([{]/.test(c.text))) {
     throw new NamingRefusal(`prefixes ${[...names].join(', ')} without locants need separating parentheses (P-16.5.1.3), which are not written yet`);
   }
 }
@@ -64,8 +68,4 @@ export function parentPart(e: Evaluated, ctx: NamingContext): string {
     parent = hydrideName({ size, ring: e.skeleton.kind === 'ring', multiple: e.multiple, freeValence: fv, citeMultipleBondLocants: citeMultiple });
   }
   return parent;
-}
-
-export function prefixLocantsOmitted(e: Evaluated): boolean {
-  return omitPrefixLocants(e);
 }

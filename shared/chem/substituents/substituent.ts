@@ -5,6 +5,7 @@ import { isCarbonyl } from '../groups/scope';
 import { isAldehydeCarbon } from '../groups/principal';
 import { alkoxy } from './alkoxy';
 import { amino } from './amino';
+import { acylPrefix } from './acyl';
 import type { Attachment, NamingContext, Skeleton, SubstituentName } from '../numbering/context';
 import { evaluate } from '../numbering/evaluate';
 import { bestCandidates, firstByName } from '../numbering/select';
@@ -53,7 +54,7 @@ function build(ctx: NamingContext, atom: number, from: number): SubstituentName 
     // P-66.6.1.2: -CHO as a prefix is formyl (its carbon cannot join a chain here: it has no other carbon).
     if (graph.adjacency[atom].every((e) => e.atom === from || graph.atoms[e.atom].element === 'O')) return { name: 'formyl', compound: false, enclose: false, atoms: collectAtoms(ctx, atom, from) };
   } else if (isCarbonyl(graph, atom)) {
-    throw new NamingRefusal(`the group attached through the carbonyl carbon atom ${atom + 1} is an acyl group; acyl prefixes (acetyl, benzoyl…, P-65.1.7) are not named yet`);
+    return acylPrefix(ctx, atom, from, collectAtoms(ctx, atom, from));
   }
   const order = graph.bonds[bondBetween(graph, atom, from)].order;
   const attachment: Attachment = { atom, from, order };

@@ -79,6 +79,16 @@ const preferred: [string, string, string][] = [
   ['O=CC1CCCCC1C=O', 'cyclohexane-1,2-dicarbaldehyde', 'P-66.6.1.1.3'],
   ['CCC(C=O)c1ccc(C=O)cc1', '4-(1-oxobutan-2-yl)benzaldehyde', 'P-29.2 prefix chain includes the CHO carbon'],
   ['O=CC1CCC(CC1)C1CCCC1C=O', '4-(2-formylcyclopentyl)cyclohexane-1-carbaldehyde', 'P-66.6.1.2 formyl'],
+  // P-65.1.7 acyl prefixes: a ketone attached through its carbonyl carbon to a senior parent
+  ['CC(=O)C1CCC(=O)CC1', '4-acetylcyclohexan-1-one', 'P-65.1.7.2.1 acetyl'],
+  ['CC(=O)c1ccc(cc1)C(=O)O', '4-acetylbenzoic acid', 'P-65.1.7.2.1'],
+  ['O=C(c1ccccc1)c1ccc(cc1)C(=O)O', '4-benzoylbenzoic acid', 'P-65.1.7.2.1 benzoyl'],
+  ['O=C(C1CCCCC1)c1ccc(cc1)C(=O)O', '4-(cyclohexanecarbonyl)benzoic acid', 'P-65.1.7.2.2 -carbonyl'],
+  ['ClCC(=O)c1ccc(cc1)C(=O)O', '4-(chloroacetyl)benzoic acid', 'P-65.1.7.2.1'],
+  ['CC(C)C(=O)c1ccc(cc1)C#N', '4-(2-methylpropanoyl)benzonitrile', 'P-65.1.7.2.2 -oyl'],
+  ['O=C(c1ccc(Cl)cc1)c1ccc(cc1)C(=O)O', '4-(4-chlorobenzoyl)benzoic acid', 'P-65.1.7.2.1'],
+  ['O=C(C1CCC(Cl)CC1)c1ccc(O)cc1', '(4-chlorocyclohexyl)(4-hydroxyphenyl)methanone', 'P-64.2.1, P-16.5.1 enclosing marks'],
+  ['CC(=O)CC(=O)c1ccccc1', '1-phenylbutane-1,3-dione', 'P-64.2.1'],
   // P-63.2.2 ethers as alkoxy/aryloxy prefixes
   ['COC', 'methoxymethane', 'P-63.2.2.1'],
   ['CCOCC', 'ethoxyethane', 'P-63.2.2.1'],
@@ -129,7 +139,7 @@ describe('explanation of principal groups', () => {
 refusesExamples('refused whole rather than half-named', [
   ['OCC=O', /acetaldehyde/], // preferred style only
   ['O=CC(C=O)CC=O', /tricarbox|more than two CHO/],
-  ['CC(=O)C1CCC(=O)CC1', /acyl/],
+  ['CC(=O)N(C)c1ccc(cc1)C(=O)O', /acylamino/],
   ['c1ccccc1Oc1ccccc1', /multiplicative/],
   ['OCCOCCO', /multiplicative/], // P-15.3: 2,2'-oxydi(ethan-1-ol)
   ['O=C(C1CCCCC1)c1ccccc1', /parentheses/], // cyclohexyl(phenyl)methanone, P-16.5.1.3
