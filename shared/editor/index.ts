@@ -1,3 +1,4 @@
 export * from './structureNode';
 export * from './attachmentEmbedNode';
+export * from './reagentsNode';
 export * from './pageNodes';

@@ -1,11 +1,10 @@
+import { CautionIcon } from './CautionIcon';
+
 /** The standing caution shown wherever experimental work is recorded. */
 export function SafetyNote() {
   return (
     <p className="flex items-start gap-2 text-xs leading-relaxed text-ink-soft" data-testid="safety-note">
-      <svg viewBox="0 0 20 20" className="mt-px size-4 shrink-0 text-reed-500" aria-hidden>
-        <path d="M10 2.5 18 17H2L10 2.5Z" fill="none" stroke="currentColor" strokeWidth="1.6" strokeLinejoin="round" />
-        <path d="M10 8v4.2M10 14.4v.1" stroke="currentColor" strokeWidth="1.8" strokeLinecap="round" />
-      </svg>
+      <CautionIcon />
       <span>
         Safety: this notebook records work; it does not replace a risk assessment, your local safety rules or a licensed
         professional&rsquo;s judgement. Check hazards and controls before you start.

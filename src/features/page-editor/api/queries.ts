@@ -2,7 +2,7 @@ import { useQuery } from '@tanstack/react-query';
 import type { AttachmentSummary } from '../../../../shared/schemas';
 import type { NameStyle } from '../../../../shared/chem';
 import { api } from '../../../lib/api';
-import { describeMolfile } from '../structure/chemistry';
+import { describeInput, describeMolfile } from '../structure/chemistry';
 
 export interface SnapshotSummary {
   id: string;
@@ -24,6 +24,7 @@ export const editorKeys = {
   snapshot: (pageId: string, snapshotId: string) => ['pages', pageId, 'history', snapshotId] as const,
   attachments: (pageId: string) => ['pages', pageId, 'attachments'] as const,
   description: (molfile: string, style: NameStyle) => ['structure-description', style, molfile] as const,
+  smilesDescription: (smiles: string) => ['smiles-description', smiles] as const,
 };
 
 export function usePageHistory(pageId: string, enabled: boolean) {
@@ -61,6 +62,17 @@ export function useStructureDescription(molfile: string, style: NameStyle) {
     queryKey: editorKeys.description(molfile, style),
     queryFn: () => describeMolfile(molfile, style),
     enabled: molfile !== '',
+    staleTime: Infinity,
+    retry: false,
+  });
+}
+
+/** Name, formula and molar mass of a reagent's SMILES (preferred names), computed in the browser. */
+export function useSmilesDescription(smiles: string) {
+  return useQuery({
+    queryKey: editorKeys.smilesDescription(smiles),
+    queryFn: () => describeInput({ smiles }),
+    enabled: smiles !== '',
     staleTime: Infinity,
     retry: false,
   });

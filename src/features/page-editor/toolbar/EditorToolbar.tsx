@@ -4,6 +4,7 @@ import { useState, type ReactNode } from 'react';
 import type { StructureFields } from '../../../../shared/editor';
 import { AttachmentPicker } from '../embeds/AttachmentPicker';
 import { $createAttachmentEmbedBlockNode } from '../nodes/AttachmentEmbedBlockNode';
+import { insertReagents } from '../reagents/reagentEdits';
 import { $insertBlock, insertTable, setTextBlock, toggleFormat } from './blockActions';
 import { BlockMenu, type BlockMenuAdd } from './BlockMenu';
 import { LinkEditor } from './LinkEditor';
@@ -56,6 +57,7 @@ export function EditorToolbar({
   const adds: BlockMenuAdd[] = [
     { label: 'Structure from text or file', hint: 'SMILES, molfile', run: () => onAddStructure('text') },
     { label: 'Structure, drawn', hint: 'drawing pad', run: () => onAddStructure('draw') },
+    { label: 'Reagent list', hint: 'amounts, hazard notes', run: () => insertReagents(editor) },
     { label: 'Table', hint: '3 × 3', run: () => insertTable(editor) },
     ...(canEmbed ? [{ label: 'Attached file', hint: 'spectrum, data', run: () => setPicking(true) }] : []),
   ];
