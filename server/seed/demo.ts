@@ -6,6 +6,7 @@ import type { Storage } from '../storage/s3';
 import { memberships, notebooks, pages, users } from '../db/schema';
 import { DEMO_PASSWORD, demoPeople } from './demoPeople';
 import { seedDemoAttachments } from './demoAttachments';
+import { seedDemoContent } from './demoContent';
 import { seedDemoSigning } from './demoSigning';
 
 export type DemoUsers = Record<string, { id: string; name: string }>;
@@ -60,6 +61,7 @@ export async function seedDemo(db: Database, storage: Storage): Promise<{ create
     }
   }
   await seedDemoAttachments(db, storage, byEmail);
+  await seedDemoContent(db, byEmail);
   await seedDemoSigning(db, byEmail);
   return { created: true, users: byEmail };
 }
