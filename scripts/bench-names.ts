@@ -2,8 +2,8 @@
  * `npm run bench:names`: names every acyclic alkane isomer C1–C14 (3,324 structures) and a mixed
  * set of generated functionalised molecules (acids, esters, amides, nitriles, aldehydes, ketones,
  * alcohols, ethers, amines on chains and rings), and has @rdkit/rdkit canonicalise the same SMILES;
- * prints rates and the time ratio for each set (medians of several alternating runs). Also times single large molecules (the aim: under
- * 20 ms each below 200 heavy atoms).
+ * prints rates and the time ratio for each set (medians of several alternating runs). Also times
+ * single large molecules (the aim: under 20 ms each below 200 heavy atoms).
  */
 import { performance } from 'node:perf_hooks';
 import { describeSync, loadChemistry } from '../shared/chem/index';
