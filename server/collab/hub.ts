@@ -17,6 +17,8 @@ export interface PageContent {
 export class CollabHub {
   private readonly rooms = new Map<string, Promise<Room | null>>();
   private closing = false;
+  /** Counts access refreshes, so an upgrade decided before one can tell it must be decided again. */
+  accessEpoch = 0;
 
   constructor(
     private readonly db: Database,
@@ -39,6 +41,20 @@ export class CollabHub {
   /** Records a history snapshot of the page as it is now; returns the snapshot id. */
   takeSnapshot(pageId: string, reason: string): Promise<string> {
     return this.withRoom(pageId, (room) => room.takeSnapshot(reason));
+  }
+
+  /**
+   * After a change to who may do what (membership removed or changed, organisation role changed,
+   * session ended), checks the affected open connections again: those of `userId` (everyone's
+   * when omitted) on pages of `notebookId` (every page when omitted). Each becomes read-only or
+   * writable as its access now says, or is closed (4401 session ended, 4403 no longer a member).
+   * Resolves when every affected connection has been decided; updates they send meanwhile wait.
+   */
+  async refreshAccess(scope: { notebookId?: string; userId?: string }): Promise<void> {
+    this.accessEpoch += 1;
+    const rooms = await Promise.all([...this.rooms.values()].map((entry) => entry.catch(() => null)));
+    const affected = rooms.filter((room): room is Room => room !== null && (!scope.notebookId || room.notebookId === scope.notebookId));
+    await Promise.all(affected.map((room) => room.refreshAccess((conn) => !scope.userId || conn.user.id === scope.userId)));
   }
 
   /**

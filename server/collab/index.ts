@@ -8,7 +8,7 @@ import { authorizeUpgrade, collabPageId, refuseUpgrade } from './upgrade';
 import { defaultTimings, type CollabTimings } from './timings';
 
 export { CollabHub, type PageContent } from './hub';
-export type { ServerAwarenessState } from './room';
+export { CLOSE_ACCESS_REVOKED, CLOSE_SESSION_ENDED, type ServerAwarenessState } from './room';
 export type { CollabTimings } from './timings';
 
 /** Largest websocket message accepted: a page with many embedded molfiles stays well below. */
@@ -51,6 +51,8 @@ export function attachCollab(
 
   async function accept(req: http.IncomingMessage, socket: Duplex, head: Buffer, pageId: string) {
     try {
+      const epoch = hub.accessEpoch;
+      const checkedAt = Date.now();
       const grant = await authorizeUpgrade(deps, req, pageId);
       const room = await hub.acquire(grant.pageId);
       try {
@@ -61,7 +63,10 @@ export function attachCollab(
           // A failed handshake never calls back; the socket closing ends the wait then.
           socket.once('close', () => resolve());
           wss.handleUpgrade(req, socket, head, (ws) => {
-            room.join(ws, { id: grant.user.id, name: grant.user.name }, grant.access.canWrite);
+            const user = { id: grant.user.id, name: grant.user.name };
+            const conn = room.join(ws, { user, sessionId: grant.sessionId, canWrite: grant.access.canWrite }, checkedAt);
+            // Access changed while this upgrade was being decided: decide again.
+            if (hub.accessEpoch !== epoch) void room.refreshAccess((c) => c === conn);
             resolve();
           });
         });

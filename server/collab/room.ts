@@ -2,6 +2,7 @@ import { WebSocket } from 'ws';
 import * as awarenessProtocol from 'y-protocols/awareness';
 import * as Y from 'yjs';
 import type { Database } from '../db/client';
+import { checkConnectionAccess, type AccessVerdict } from './access';
 import { PageProjector, type PageProjection } from './projection';
 import {
   awarenessMessage,
@@ -28,14 +29,32 @@ export interface CollabUser {
   name: string;
 }
 
-export interface Connection {
-  ws: WebSocket;
+/** Who opened a connection and what the upgrade allowed. */
+export interface ConnectionGrant {
   user: CollabUser;
-  /** From the member's role; the page lock is checked separately, per update. */
+  /** The session the upgrade was signed in with; checked again while the connection lasts. */
+  sessionId: string;
   canWrite: boolean;
+}
+
+export interface Connection extends ConnectionGrant {
+  ws: WebSocket;
   /** Awareness client ids this connection announced, removed when it leaves. */
   awarenessIds: Set<number>;
   alive: boolean;
+  /** When session and membership were last confirmed (ms). */
+  checkedAt: number;
+  /** Access checks under way (they run one after another); updates wait in `held` meanwhile. */
+  pendingChecks: number;
+  lastCheck: Promise<void>;
+  held: Uint8Array[];
+  /**
+   * Some change from this connection was dropped: its later changes build on content the server
+   * never took, so they could not be applied until the client syncs afresh.
+   */
+  diverged: boolean;
+  /** Closed by the server; whatever still arrives on it is ignored. */
+  closed: boolean;
 }
 
 /** What the server itself announces in awareness; clients read it to switch to read-only. */
@@ -45,7 +64,18 @@ export interface ServerAwarenessState {
 
 /** Close codes of our own (4000–4999 is the application range). */
 export const CLOSE_MALFORMED = 4400;
+/** The session was signed out, invalidated (password reset) or expired: sign in again. */
+export const CLOSE_SESSION_ENDED = 4401;
+/** The person is no longer a member of the page's notebook (or the page is gone). */
+export const CLOSE_ACCESS_REVOKED = 4403;
+/**
+ * May edit again (promoted, page unlocked) after some of its edits were dropped: reconnect, so the
+ * sync step sends the client's state afresh. What it typed meanwhile is merged then, as offline
+ * edits are.
+ */
+export const CLOSE_RESYNC = 4205;
 export const CLOSE_STORE_FAILED = 1011;
+export const CLOSE_CHECK_FAILED = 1011;
 export const CLOSE_SHUTDOWN = 1001;
 
 /**
@@ -142,8 +172,20 @@ export class Room {
     return this.conns.size;
   }
 
-  join(ws: WebSocket, user: CollabUser, canWrite: boolean): void {
-    const conn: Connection = { ws, user, canWrite, awarenessIds: new Set(), alive: true };
+  /** Adds a connection; `checkedAt` is when the grant was decided (a refresh since then rechecks it). */
+  join(ws: WebSocket, grant: ConnectionGrant, checkedAt: number): Connection {
+    const conn: Connection = {
+      ...grant,
+      ws,
+      awarenessIds: new Set(),
+      alive: true,
+      checkedAt,
+      pendingChecks: 0,
+      lastCheck: Promise.resolve(),
+      held: [],
+      diverged: false,
+      closed: false,
+    };
     this.conns.set(ws, conn);
     this.cancelUnload();
     ws.on('message', (data: Buffer) => this.receive(conn, new Uint8Array(data.buffer, data.byteOffset, data.byteLength)));
@@ -155,6 +197,16 @@ export class Room {
     this.send(conn, syncStep1Message(this.doc));
     const present = [...this.awareness.getStates().keys()];
     if (present.length > 0) this.send(conn, awarenessMessage(this.awareness, present));
+    return conn;
+  }
+
+  /**
+   * Checks again, from the database, the session and membership behind the chosen connections
+   * (after a membership, role or sign-out change): each keeps its rights, becomes read-only or
+   * writable, or is closed (4401 session ended, 4403 no longer a member).
+   */
+  async refreshAccess(which: (conn: Connection) => boolean): Promise<void> {
+    await Promise.all([...this.conns.values()].filter(which).map((conn) => this.checkAccess(conn)));
   }
 
   /** From now on updates are dropped (locked) or accepted again; connected clients are told. */
@@ -165,6 +217,10 @@ export class Room {
     // Updates accepted before the lock are still stored; a sign-off closes the editing sessions.
     await this.flush();
     if (locked) await this.run(() => this.endSessions());
+    else {
+      // Whoever typed into the locked page catches up from a fresh sync (see CLOSE_RESYNC).
+      for (const conn of this.conns.values()) if (conn.canWrite && conn.diverged) this.disconnect(conn, CLOSE_RESYNC, 'the page can be edited again; reconnect to catch up');
+    }
   }
 
   /** Waits until every update accepted so far is stored and applied. */
@@ -187,6 +243,7 @@ export class Room {
   }
 
   private receive(conn: Connection, data: Uint8Array): void {
+    if (conn.closed) return;
     let message: IncomingMessage;
     try {
       message = decodeMessage(data);
@@ -215,8 +272,20 @@ export class Room {
   }
 
   private receiveUpdate(conn: Connection, update: Uint8Array): void {
-    // Readers, organisation viewers and locked pages: the change is dropped, never stored or relayed.
-    if (!conn.canWrite || this.locked || this.unloading) return;
+    // While the connection's rights are being checked, its changes wait for the verdict.
+    if (conn.pendingChecks > 0) {
+      conn.held.push(update);
+      return;
+    }
+    if (conn.canWrite && Date.now() - conn.checkedAt >= this.timings.accessCheckMs) {
+      conn.held.push(update);
+      void this.checkAccess(conn);
+      return;
+    }
+    this.acceptUpdate(conn, update);
+  }
+
+  private acceptUpdate(conn: Connection, update: Uint8Array): void {
     let kind: 'changes' | 'empty';
     try {
       kind = inspectUpdate(update);
@@ -225,6 +294,11 @@ export class Room {
       return;
     }
     if (kind === 'empty') return;
+    // Readers, organisation viewers and locked pages: the change is dropped, never stored or relayed.
+    if (!conn.canWrite || this.locked || this.unloading) {
+      conn.diverged = true;
+      return;
+    }
     this.queue.push({ update, userId: conn.user.id, conn });
     if (!this.writeScheduled) {
       this.writeScheduled = true;
@@ -262,6 +336,68 @@ export class Room {
     for (const conn of this.conns.values()) if (conn !== origin) this.send(conn, message);
   }
 
+  /** Runs the access checks of a connection one after another; held updates wait for the last. */
+  private checkAccess(conn: Connection): Promise<void> {
+    conn.pendingChecks += 1;
+    const check = conn.lastCheck
+      .then(async () => {
+        if (conn.closed) return;
+        const startedAt = Date.now();
+        let verdict: AccessVerdict | null;
+        try {
+          verdict = await checkConnectionAccess(this.db, conn.sessionId, this.pageId);
+        } catch (error) {
+          logFailure('checking access')(error);
+          verdict = null;
+        }
+        this.applyVerdict(conn, verdict, startedAt);
+      })
+      .finally(() => {
+        conn.pendingChecks -= 1;
+        if (conn.pendingChecks === 0) this.releaseHeld(conn);
+      });
+    conn.lastCheck = check;
+    return check;
+  }
+
+  /** `null`: the check itself failed, so the connection cannot be vouched for; it may reconnect. */
+  private applyVerdict(conn: Connection, verdict: AccessVerdict | null, checkedAt: number): void {
+    if (conn.closed) return;
+    if (verdict?.kind === 'open') {
+      conn.checkedAt = checkedAt;
+      if (verdict.canWrite && !conn.canWrite && conn.diverged) {
+        this.disconnect(conn, CLOSE_RESYNC, 'you may edit again; reconnect to catch up');
+        return;
+      }
+      conn.canWrite = verdict.canWrite;
+      if (!conn.canWrite) this.dropQueued(conn);
+      return;
+    }
+    if (!verdict) this.disconnect(conn, CLOSE_CHECK_FAILED, 'could not check access; reconnect');
+    else if (verdict.kind === 'session-ended') this.disconnect(conn, CLOSE_SESSION_ENDED, 'session ended; sign in again');
+    else this.disconnect(conn, CLOSE_ACCESS_REVOKED, 'no longer a member of this notebook');
+  }
+
+  private releaseHeld(conn: Connection): void {
+    const held = conn.held.splice(0);
+    for (const update of held) if (!conn.closed) this.acceptUpdate(conn, update);
+  }
+
+  /** Updates of a connection that lost write access, not yet stored: never acknowledged, so dropped. */
+  private dropQueued(conn: Connection): void {
+    const before = this.queue.length;
+    this.queue = this.queue.filter((entry) => entry.conn !== conn);
+    if (this.queue.length < before) conn.diverged = true;
+  }
+
+  private disconnect(conn: Connection, code: number, reason: string): void {
+    conn.closed = true;
+    conn.canWrite = false;
+    conn.held = [];
+    this.dropQueued(conn);
+    conn.ws.close(code, reason);
+  }
+
   private relayAwareness({ added, updated, removed }: AwarenessChanges, origin: unknown): void {
     const conn = [...this.conns.values()].find((c) => c === origin);
     if (conn) {
@@ -286,11 +422,13 @@ export class Room {
 
   private leave(conn: Connection): void {
     if (!this.conns.delete(conn.ws)) return;
+    conn.closed = true;
     awarenessProtocol.removeAwarenessStates(this.awareness, [...conn.awarenessIds], null);
     this.scheduleUnload();
   }
 
   private tick(): void {
+    const now = Date.now();
     for (const conn of this.conns.values()) {
       if (!conn.alive) {
         conn.ws.terminate();
@@ -298,8 +436,9 @@ export class Room {
       }
       conn.alive = false;
       conn.ws.ping();
+      // Catches sessions that expired or ended without a refresh (and readers, who send no updates).
+      if (conn.pendingChecks === 0 && now - conn.checkedAt >= this.timings.accessCheckMs) void this.checkAccess(conn);
     }
-    const now = Date.now();
     const idle = [...this.lastUpdateByUser].filter(([, at]) => now - at >= this.timings.sessionIdleMs).map(([userId]) => userId);
     if (idle.length > 0) void this.run(() => this.endSessions(idle)).catch(logFailure('closing editing sessions'));
     if (this.firstEditSinceSnapshotAt !== null && now - this.firstEditSinceSnapshotAt >= this.timings.snapshotEveryMs) {

@@ -14,6 +14,11 @@ export interface CollabTimings {
   unloadAfterMs: number;
   /** Period of the room's housekeeping (idle sessions, activity snapshots) and of websocket pings. */
   tickMs: number;
+  /**
+   * A connection's session and membership are checked again once this long has passed since the
+   * last check: at the next housekeeping tick, or before its next update is accepted.
+   */
+  accessCheckMs: number;
 }
 
 export const defaultTimings: CollabTimings = {
@@ -24,4 +29,5 @@ export const defaultTimings: CollabTimings = {
   sessionIdleMs: 10 * 60_000,
   unloadAfterMs: 30_000,
   tickMs: 30_000,
+  accessCheckMs: 60_000,
 };

@@ -10,6 +10,7 @@ const UUID = /^[0-9a-f]{8}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{12}$/i;
 
 export interface UpgradeGrant {
   pageId: string;
+  sessionId: string;
   user: User;
   access: PageAccess;
 }
@@ -32,10 +33,10 @@ export async function authorizeUpgrade(deps: AppDeps, req: http.IncomingMessage,
     throw new HttpError(403, 'bad_origin', 'This connection did not come from the Quillane app (Origin check failed)');
   }
   const sessionId = deps.auth.readSessionCookie(req.headers.cookie ?? '');
-  const { user } = sessionId ? await deps.auth.validateSession(sessionId) : { user: null };
-  if (!user) throw new HttpError(401, 'not_signed_in', 'Please sign in first');
+  const { user, session } = sessionId ? await deps.auth.validateSession(sessionId) : { user: null, session: null };
+  if (!user || !session) throw new HttpError(401, 'not_signed_in', 'Please sign in first');
   const access = await pageAccess(deps.db, user, pageId.toLowerCase());
-  return { pageId: access.page.id, user, access };
+  return { pageId: access.page.id, sessionId: session.id, user, access };
 }
 
 function allowedOrigin(deps: AppDeps, req: http.IncomingMessage, origin: string): boolean {

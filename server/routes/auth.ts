@@ -12,6 +12,7 @@ import { hashPassword, verifyPassword } from '../auth/passwords';
 import { startSession, toMe } from '../auth/sessions';
 import { signInThrottle } from '../auth/throttle';
 import { hashToken, newToken } from '../auth/tokens';
+import { getCollabHub } from '../collab';
 import type { AppDeps } from '../context';
 import { invitations, passwordResets, users } from '../db/schema';
 import { HttpError, notFound, parseInput } from '../http/errors';
@@ -37,6 +38,7 @@ export function authRoutes(deps: AppDeps): Router {
     const session = res.locals.session;
     currentUser(res);
     if (session) await deps.auth.invalidateSession(session.id);
+    await getCollabHub(deps).refreshAccess({ userId: currentUser(res).id });
     res.append('Set-Cookie', deps.auth.createBlankSessionCookie().serialize());
     res.status(204).end();
   });
@@ -115,6 +117,7 @@ export function authRoutes(deps: AppDeps): Router {
       return updated;
     });
     await deps.auth.invalidateUserSessions(user.id);
+    await getCollabHub(deps).refreshAccess({ userId: user.id });
     await recordAuditEvent(db, { type: 'password.reset', actor: user });
     await startSession(deps, res, user.id);
     res.json(toMe(user));

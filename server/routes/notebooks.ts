@@ -4,6 +4,7 @@ import { membershipUpsertSchema, notebookCreateSchema } from '../../shared/schem
 import { recordAuditEvent } from '../audit/record';
 import { notebookAccess, type NotebookAccess } from '../auth/access';
 import { currentUser, requireRole } from '../auth/middleware';
+import { getCollabHub } from '../collab';
 import type { AppDeps } from '../context';
 import { memberships, notebooks, pages, users } from '../db/schema';
 import { forbidden, HttpError, notFound, parseInput } from '../http/errors';
@@ -87,6 +88,7 @@ export function notebookRoutes(deps: AppDeps): Router {
       .insert(memberships)
       .values({ notebookId: access.notebookId, userId: member.id, role: input.role })
       .onConflictDoUpdate({ target: [memberships.notebookId, memberships.userId], set: { role: input.role } });
+    await getCollabHub(deps).refreshAccess({ notebookId: access.notebookId, userId: member.id });
     await recordAuditEvent(db, {
       type: 'membership.changed',
       actor,
@@ -106,6 +108,7 @@ export function notebookRoutes(deps: AppDeps): Router {
       .where(and(eq(memberships.notebookId, access.notebookId), eq(memberships.userId, userId)))
       .returning();
     if (removed.length === 0) throw notFound('Member');
+    await getCollabHub(deps).refreshAccess({ notebookId: access.notebookId, userId });
     await recordAuditEvent(db, {
       type: 'membership.changed',
       actor,

@@ -4,6 +4,7 @@ import { invitationCreateSchema, userRoleUpdateSchema } from '../../shared/schem
 import { recordAuditEvent } from '../audit/record';
 import { currentUser, requireRole } from '../auth/middleware';
 import { newToken } from '../auth/tokens';
+import { getCollabHub } from '../collab';
 import type { AppDeps } from '../context';
 import { caughtMail, invitations, memberships, users } from '../db/schema';
 import { HttpError, notFound, parseInput } from '../http/errors';
@@ -68,6 +69,7 @@ export function peopleRoutes(deps: AppDeps): Router {
           : [];
       return { after: updated, readerIn: downgraded.map((m) => m.notebookId) };
     });
+    await getCollabHub(deps).refreshAccess({ userId: id });
     await recordAuditEvent(db, {
       type: 'user.role_changed',
       actor: admin,
