@@ -74,3 +74,36 @@ export function awarenessMessage(awareness: awarenessProtocol.Awareness, clients
   encoding.writeVarUint8Array(encoder, awarenessProtocol.encodeAwarenessUpdate(awareness, clients));
   return encoding.toUint8Array(encoder);
 }
+
+/** One client's entry in an awareness update: its presence state as JSON (`null` when it left). */
+export interface AwarenessEntry {
+  clientId: number;
+  clock: number;
+  state: string;
+  removed: boolean;
+}
+
+/** Splits an awareness update into its entries (y-protocols' layout); throws on anything malformed. */
+export function decodeAwarenessEntries(update: Uint8Array): AwarenessEntry[] {
+  const decoder = decoding.createDecoder(update);
+  const count = decoding.readVarUint(decoder);
+  const entries: AwarenessEntry[] = [];
+  for (let i = 0; i < count; i += 1) {
+    const clientId = decoding.readVarUint(decoder);
+    const clock = decoding.readVarUint(decoder);
+    const state = decoding.readVarString(decoder);
+    entries.push({ clientId, clock, state, removed: JSON.parse(state) === null });
+  }
+  return entries;
+}
+
+export function encodeAwarenessEntries(entries: AwarenessEntry[]): Uint8Array {
+  const encoder = encoding.createEncoder();
+  encoding.writeVarUint(encoder, entries.length);
+  for (const { clientId, clock, state } of entries) {
+    encoding.writeVarUint(encoder, clientId);
+    encoding.writeVarUint(encoder, clock);
+    encoding.writeVarString(encoder, state);
+  }
+  return encoding.toUint8Array(encoder);
+}

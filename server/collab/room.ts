@@ -6,11 +6,14 @@ import { checkConnectionAccess, type AccessVerdict } from './access';
 import { PageProjector, type PageProjection } from './projection';
 import {
   awarenessMessage,
+  decodeAwarenessEntries,
   decodeMessage,
+  encodeAwarenessEntries,
   inspectUpdate,
   syncStep1Message,
   syncStep2Message,
   updateMessage,
+  type AwarenessEntry,
   type IncomingMessage,
 } from './protocol';
 import {
@@ -39,7 +42,7 @@ export interface ConnectionGrant {
 
 export interface Connection extends ConnectionGrant {
   ws: WebSocket;
-  /** Awareness client ids this connection announced, removed when it leaves. */
+  /** The awareness client id this connection introduced itself with; its state goes when it leaves. */
   awarenessIds: Set<number>;
   alive: boolean;
   /** When session and membership were last confirmed (ms). */
@@ -78,6 +81,9 @@ export const CLOSE_STORE_FAILED = 1011;
 export const CLOSE_CHECK_FAILED = 1011;
 export const CLOSE_SHUTDOWN = 1001;
 
+/** A browser tab's provider has one awareness client id per connection. */
+const AWARENESS_IDS_PER_CONNECTION = 1;
+
 /**
  * One page's shared document in memory, with everyone connected to it. Every change a client
  * sends goes through one ordered pipeline: stored (committed) first, then applied to the
@@ -89,6 +95,8 @@ export class Room {
   readonly awareness = new awarenessProtocol.Awareness(this.doc);
   private readonly projector = new PageProjector();
   private readonly conns = new Map<WebSocket, Connection>();
+  /** Which connection introduced each awareness client id (only it may change that entry). */
+  private readonly awarenessOwners = new Map<number, Connection>();
   private tail: Promise<unknown> = Promise.resolve();
   private queue: (AcceptedUpdate & { conn: Connection })[] = [];
   private writeScheduled = false;
@@ -122,7 +130,7 @@ export class Room {
       this.projector.apply(update);
       this.relay(update, origin);
     });
-    this.awareness.on('update', (changes: AwarenessChanges, origin: unknown) => this.relayAwareness(changes, origin));
+    this.awareness.on('update', (changes: AwarenessChanges) => this.relayAwareness(changes));
     this.announceLock();
     this.tickTimer = setInterval(() => this.tick(), timings.tickMs);
     this.tickTimer.unref();
@@ -259,11 +267,7 @@ export class Room {
         this.receiveUpdate(conn, message.update);
         break;
       case 'awareness':
-        try {
-          awarenessProtocol.applyAwarenessUpdate(this.awareness, message.update, conn);
-        } catch {
-          conn.ws.close(CLOSE_MALFORMED, 'malformed awareness update');
-        }
+        this.receiveAwareness(conn, message.update);
         break;
       case 'query-awareness':
         this.send(conn, awarenessMessage(this.awareness, [...this.awareness.getStates().keys()]));
@@ -398,12 +402,41 @@ export class Room {
     conn.ws.close(code, reason);
   }
 
-  private relayAwareness({ added, updated, removed }: AwarenessChanges, origin: unknown): void {
-    const conn = [...this.conns.values()].find((c) => c === origin);
-    if (conn) {
-      for (const id of added) conn.awarenessIds.add(id);
-      for (const id of removed) conn.awarenessIds.delete(id);
+  /**
+   * Presence is set only for the entry a connection introduced itself with: never the server's
+   * own (the lock) and never another connection's, so nobody can rewrite or remove someone
+   * else's cursor or name. Clients also echo the entries they receive; those are dropped here.
+   */
+  private receiveAwareness(conn: Connection, update: Uint8Array): void {
+    let own;
+    try {
+      own = decodeAwarenessEntries(update).filter((entry) => this.mayAnnounce(conn, entry));
+    } catch {
+      conn.ws.close(CLOSE_MALFORMED, 'malformed awareness update');
+      return;
     }
+    if (own.length > 0) awarenessProtocol.applyAwarenessUpdate(this.awareness, encodeAwarenessEntries(own), conn);
+  }
+
+  /**
+   * An id nobody holds becomes the connection's when it announces a state for it (not a removal).
+   * The same person's new connection takes over their entry, with a newer state than the server
+   * has (an echo is not newer), from an old one that has not noticed yet that it is gone (a
+   * reconnect after a network drop).
+   */
+  private mayAnnounce(conn: Connection, { clientId, clock, removed }: AwarenessEntry): boolean {
+    if (clientId === this.awareness.clientID) return false;
+    const owner = this.awarenessOwners.get(clientId);
+    if (owner === conn) return true;
+    if (removed || conn.awarenessIds.size >= AWARENESS_IDS_PER_CONNECTION) return false;
+    if (owner && (owner.user.id !== conn.user.id || clock <= (this.awareness.meta.get(clientId)?.clock ?? 0))) return false;
+    owner?.awarenessIds.delete(clientId);
+    this.awarenessOwners.set(clientId, conn);
+    conn.awarenessIds.add(clientId);
+    return true;
+  }
+
+  private relayAwareness({ added, updated, removed }: AwarenessChanges): void {
     const message = awarenessMessage(this.awareness, [...added, ...updated, ...removed]);
     for (const other of this.conns.values()) this.send(other, message);
   }
@@ -423,6 +456,7 @@ export class Room {
   private leave(conn: Connection): void {
     if (!this.conns.delete(conn.ws)) return;
     conn.closed = true;
+    for (const id of conn.awarenessIds) this.awarenessOwners.delete(id);
     awarenessProtocol.removeAwarenessStates(this.awareness, [...conn.awarenessIds], null);
     this.scheduleUnload();
   }

@@ -1,45 +1,30 @@
 import { $createParagraphNode, $createTextNode, $getRoot } from 'lexical';
 import { and, desc, eq } from 'drizzle-orm';
-import { afterAll, afterEach, beforeAll, describe, expect, it } from 'vitest';
+import { beforeAll, describe, expect, it } from 'vitest';
 import * as Y from 'yjs';
 import { getCollabHub } from '../../server/collab';
-import { auditEvents, collabDocuments, collabUpdates, notebooks, pageContent, pages, users } from '../../server/db/schema';
+import { auditEvents, collabDocuments, collabUpdates, pageContent, pages, users } from '../../server/db/schema';
 import { StructureNode } from '../../shared/editor';
 import { ApiClient, signedIn } from '../support/api';
-import { connectCollab, eventually, lexicalEditorOn, startCollabServer, waitFor, type CollabClient } from '../support/collab';
+import { eventually, lexicalEditorOn, startCollabServer, waitFor, type CollabClient } from '../support/collab';
+import { demoNotebookFrame } from '../support/collabFrame';
 import type { TestServer } from '../support/server';
 
 // Short timings so the background work (projection, compaction, idle snapshots, unloading) happens
 // within a test; the production defaults are in server/collab/timings.ts.
+const frame = demoNotebookFrame(() =>
+  startCollabServer({ projectionDelayMs: 50, projectionMaxDelayMs: 200, compactAfterUpdates: 5, unloadAfterMs: 100, tickMs: 100 }),
+);
+const { newPage, join } = frame;
 let server: TestServer;
 let chemist: ApiClient;
 let chemist2: ApiClient;
 let notebookId: string;
-const open: CollabClient[] = [];
 
 beforeAll(async () => {
-  server = await startCollabServer({ projectionDelayMs: 50, projectionMaxDelayMs: 200, compactAfterUpdates: 5, unloadAfterMs: 100, tickMs: 100 });
-  chemist = await signedIn(server.url, 'chemist@saltmarsh.test');
+  ({ server, chemist, notebookId } = frame);
   chemist2 = await signedIn(server.url, 'chemist2@saltmarsh.test');
-  const [notebook] = await server.deps.db.select().from(notebooks).where(eq(notebooks.title, 'Fruity esters from short-chain acids'));
-  notebookId = notebook.id;
 });
-afterEach(() => {
-  for (const client of open.splice(0)) client.destroy();
-});
-afterAll(() => server.close());
-
-async function newPage(title: string): Promise<string> {
-  const response = await chemist.post(`/api/notebooks/${notebookId}/pages`, { title });
-  expect(response.status).toBe(201);
-  return response.body.id;
-}
-
-async function join(client: ApiClient, pageId: string): Promise<CollabClient> {
-  const collab = await connectCollab(server.url, pageId, client.sessionCookie);
-  open.push(collab);
-  return collab;
-}
 
 function writeParagraph(client: CollabClient, text: string, structure?: { key: string; smiles: string; molfile: string }) {
   const editor = lexicalEditorOn(client);

@@ -1,44 +1,26 @@
 import { and, eq } from 'drizzle-orm';
-import { afterAll, afterEach, beforeAll, describe, expect, it } from 'vitest';
+import { beforeAll, describe, expect, it } from 'vitest';
 import * as Y from 'yjs';
 import { getCollabHub } from '../../server/collab';
-import { collabUpdates, notebooks, pages, users } from '../../server/db/schema';
+import { collabUpdates, pages, users } from '../../server/db/schema';
 import { signedIn, type ApiClient } from '../support/api';
 import { collabUrl, connectCollab, serverCaughtUp, upgradeStatus, waitFor, type CollabClient } from '../support/collab';
+import { demoNotebookFrame } from '../support/collabFrame';
 import { startServer, type TestServer } from '../support/server';
 
+const frame = demoNotebookFrame(startServer);
+const { newPage, join } = frame;
 let server: TestServer;
 let chemist: ApiClient;
 let chemist2: ApiClient;
 let viewer: ApiClient;
-let notebookId: string;
-const open: CollabClient[] = [];
 
 beforeAll(async () => {
-  server = await startServer();
-  chemist = await signedIn(server.url, 'chemist@saltmarsh.test');
+  ({ server, chemist } = frame);
+  // chemist@ owns the demo notebook, chemist2@ edits, viewer@ reads (see server/seed/demo.ts).
   chemist2 = await signedIn(server.url, 'chemist2@saltmarsh.test');
   viewer = await signedIn(server.url, 'viewer@saltmarsh.test');
-  // A demo notebook: chemist@ owns it, chemist2@ edits, viewer@ reads (see server/seed/demo.ts).
-  const [notebook] = await server.deps.db.select().from(notebooks).where(eq(notebooks.title, 'Fruity esters from short-chain acids'));
-  notebookId = notebook.id;
 });
-afterEach(() => {
-  for (const client of open.splice(0)) client.destroy();
-});
-afterAll(() => server.close());
-
-async function newPage(title: string): Promise<string> {
-  const response = await chemist.post(`/api/notebooks/${notebookId}/pages`, { title });
-  expect(response.status).toBe(201);
-  return response.body.id;
-}
-
-async function join(client: ApiClient, pageId: string): Promise<CollabClient> {
-  const collab = await connectCollab(server.url, pageId, client.sessionCookie);
-  open.push(collab);
-  return collab;
-}
 
 async function userId(email: string): Promise<string> {
   const [row] = await server.deps.db.select({ id: users.id }).from(users).where(eq(users.email, email));
