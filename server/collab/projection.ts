@@ -79,7 +79,8 @@ export function projectPage(state: Uint8Array): PageProjection {
   return projection;
 }
 
-function createProjectionEditor(): LexicalEditor {
+/** A headless editor with every node type a page holds (see shared/editor). */
+export function createProjectionEditor(): LexicalEditor {
   return createEditor({
     namespace: 'page-projection',
     nodes: pageNodes,

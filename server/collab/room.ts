@@ -3,6 +3,7 @@ import * as awarenessProtocol from 'y-protocols/awareness';
 import * as Y from 'yjs';
 import type { Database } from '../db/client';
 import { checkConnectionAccess, type AccessVerdict } from './access';
+import { firstParagraphUpdate } from './firstParagraph';
 import { PageProjector, type PageProjection } from './projection';
 import {
   awarenessMessage,
@@ -17,6 +18,7 @@ import {
   type IncomingMessage,
 } from './protocol';
 import {
+  appendFirstUpdate,
   appendUpdates,
   closeEditingSessions,
   compactPage,
@@ -152,6 +154,12 @@ export class Room {
       for (const row of stored.updates) Y.applyUpdate(room.doc, row.update);
     });
     if (room.uncompacted >= timings.compactAfterUpdates) void room.run(() => room.compact()).catch(logFailure('compaction'));
+    try {
+      await room.run(() => room.writeFirstParagraph());
+    } catch (error) {
+      await room.unload(true);
+      throw error;
+    }
     return room;
   }
 
@@ -228,6 +236,8 @@ export class Room {
     else {
       // Whoever typed into the locked page catches up from a fresh sync (see CLOSE_RESYNC).
       for (const conn of this.conns.values()) if (conn.canWrite && conn.diverged) this.disconnect(conn, CLOSE_RESYNC, 'the page can be edited again; reconnect to catch up');
+      // A page signed before it ever had content gets its first paragraph once it can be edited.
+      await this.run(() => this.writeFirstParagraph());
     }
   }
 
@@ -497,6 +507,19 @@ export class Room {
     const projection = this.projector.project();
     await saveProjection(this.db, this.pageId, projection, { touchPage: changed });
     return projection;
+  }
+
+  /**
+   * A page with nothing stored gets its first paragraph from the server, stored like any update
+   * and applied before anyone receives the document (see firstParagraph.ts). Locked pages stay
+   * as they are until they can be edited again.
+   */
+  private async writeFirstParagraph(): Promise<void> {
+    if (this.locked || this.doc.store.clients.size > 0) return;
+    const update = firstParagraphUpdate();
+    this.lastUpdateId = await appendFirstUpdate(this.db, this.pageId, update);
+    this.uncompacted += 1;
+    Y.applyUpdate(this.doc, update, null);
   }
 
   private async snapshot(reason: string): Promise<string> {

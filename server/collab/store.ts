@@ -77,6 +77,12 @@ export async function appendUpdates(db: Database, pageId: string, batch: Accepte
   });
 }
 
+/** Stores the update that creates a page's document; it has no author (the server writes it). */
+export async function appendFirstUpdate(db: Database, pageId: string, update: Uint8Array): Promise<number> {
+  const [row] = await db.insert(collabUpdates).values({ pageId, update, userId: null, receivedAt: new Date() }).returning({ id: collabUpdates.id });
+  return row.id;
+}
+
 /** Folds everything up to `throughUpdateId` into one state row and drops the folded updates. */
 export async function compactPage(db: Database, pageId: string, state: Uint8Array, throughUpdateId: number): Promise<void> {
   await db.transaction(async (tx) => {

@@ -1,4 +1,3 @@
-import { $createParagraphNode, $createTextNode, $getRoot } from 'lexical';
 import { and, desc, eq } from 'drizzle-orm';
 import { beforeAll, describe, expect, it } from 'vitest';
 import * as Y from 'yjs';
@@ -6,7 +5,7 @@ import { getCollabHub } from '../../server/collab';
 import { auditEvents, collabDocuments, collabUpdates, pageContent, pages, users } from '../../server/db/schema';
 import { StructureNode } from '../../shared/editor';
 import { ApiClient, signedIn } from '../support/api';
-import { eventually, lexicalEditorOn, startCollabServer, waitFor, type CollabClient } from '../support/collab';
+import { eventually, lexicalEditorOn, startCollabServer, waitFor, writeBlocks, type CollabClient } from '../support/collab';
 import { demoNotebookFrame } from '../support/collabFrame';
 import type { TestServer } from '../support/server';
 
@@ -27,15 +26,8 @@ beforeAll(async () => {
 });
 
 function writeParagraph(client: CollabClient, text: string, structure?: { key: string; smiles: string; molfile: string }) {
-  const editor = lexicalEditorOn(client);
-  editor.update(
-    () => {
-      $getRoot().append($createParagraphNode().append($createTextNode(text)));
-      if (structure) {
-        $getRoot().append(new StructureNode({ structureKey: structure.key, molfile: structure.molfile, smiles: structure.smiles, label: 'compound 1' }));
-      }
-    },
-    { discrete: true },
+  writeBlocks(lexicalEditorOn(client), [text], () =>
+    structure ? [new StructureNode({ structureKey: structure.key, molfile: structure.molfile, smiles: structure.smiles, label: 'compound 1' })] : [],
   );
 }
 
@@ -69,7 +61,7 @@ describe('page projection (page_content)', () => {
     const writer = await join(chemist, pageId);
     const observer = await join(chemist2, pageId);
     writeParagraph(writer, 'Final yield 6.1 g.');
-    await waitFor(() => observer.root.length > 0, 'the edit relayed');
+    await waitFor(() => observer.root.toJSON().includes('Final yield'), 'the edit relayed');
     const content = await getCollabHub(server.deps).currentContent(pageId);
     expect(content.text).toBe('Final yield 6.1 g.');
     expect(content.structures).toEqual([]);

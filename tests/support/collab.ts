@@ -1,5 +1,14 @@
 import { createBinding, syncLexicalUpdateToYjs, syncYjsChangesToLexical } from '@lexical/yjs';
-import { createEditor, type LexicalEditor } from 'lexical';
+import {
+  $createParagraphNode,
+  $createTextNode,
+  $getRoot,
+  $isParagraphNode,
+  COLLABORATION_TAG,
+  createEditor,
+  type LexicalEditor,
+  type LexicalNode,
+} from 'lexical';
 import http from 'node:http';
 import { WebSocket } from 'ws';
 import { WebsocketProvider } from 'y-websocket';
@@ -121,16 +130,46 @@ export function upgradeStatus(url: string, headers: Record<string, string>): Pro
  * A Lexical editor bound both ways to a client's document, with the page's node types: what it
  * writes reaches the server exactly as the browser editor's edits do.
  */
-export function lexicalEditorOn(client: CollabClient): LexicalEditor {
+export function lexicalEditorOn(client: Pick<CollabClient, 'doc'>): LexicalEditor {
   const editor = createEditor({ namespace: 'test-editor', nodes: pageNodes, onError: (error) => { throw error; } });
   const binding = createBinding(editor, silentProvider, 'page', client.doc, new Map([['page', client.doc]]));
   editor.registerUpdateListener(({ prevEditorState, editorState, dirtyElements, dirtyLeaves, normalizedNodes, tags }) => {
     syncLexicalUpdateToYjs(binding, silentProvider, prevEditorState, editorState, dirtyElements, dirtyLeaves, normalizedNodes, tags);
   });
-  binding.root.getSharedType().observeDeep((events, transaction) => {
+  const shared = binding.root.getSharedType();
+  shared.observeDeep((events, transaction) => {
     if (transaction.origin !== binding) syncYjsChangesToLexical(binding, silentProvider, events, false);
   });
+  // The client has synced already (the page's first paragraph at least): read the document in the
+  // way the binding loads a shared element it has not seen before.
+  if (shared.length > 0) {
+    editor.update(
+      () => {
+        binding.root.applyChildrenYjsDelta(binding, shared.toDelta());
+        binding.root.syncChildrenFromYjs(binding);
+      },
+      { discrete: true, tag: COLLABORATION_TAG },
+    );
+  }
   return editor;
+}
+
+/**
+ * Writes paragraphs (and any further blocks) the way a person does on a new page: the first text
+ * goes into the page's empty first paragraph, everything else after it.
+ */
+export function writeBlocks(editor: LexicalEditor, paragraphs: string[], more: () => LexicalNode[] = () => []): void {
+  editor.update(
+    () => {
+      const root = $getRoot();
+      const only = root.getChildrenSize() === 1 ? root.getFirstChild() : null;
+      const texts = [...paragraphs];
+      if ($isParagraphNode(only) && only.getTextContentSize() === 0 && texts.length > 0) only.append($createTextNode(texts.shift()));
+      for (const text of texts) root.append($createParagraphNode().append($createTextNode(text)));
+      root.append(...more());
+    },
+    { discrete: true },
+  );
 }
 
 /**

@@ -1,7 +1,6 @@
-import { $createParagraphNode, $createTextNode, $getRoot } from 'lexical';
 import type { ApiClient } from './api';
 import { signedIn } from './api';
-import { connectCollab, lexicalEditorOn, serverCaughtUp } from './collab';
+import { connectCollab, lexicalEditorOn, serverCaughtUp, writeBlocks } from './collab';
 import { createPerson, latestMailTo, signedInAs, type TestPerson } from './fixtures';
 import type { TestServer } from './server';
 
@@ -63,13 +62,7 @@ export async function newPage(api: ApiClient, notebookId: string, title: string)
 export async function writeOnPage(server: TestServer, api: ApiClient, pageId: string, paragraphs: string[]): Promise<void> {
   const client = await connectCollab(server.url, pageId, api.sessionCookie);
   try {
-    const editor = lexicalEditorOn(client);
-    editor.update(
-      () => {
-        for (const text of paragraphs) $getRoot().append($createParagraphNode().append($createTextNode(text)));
-      },
-      { discrete: true },
-    );
+    writeBlocks(lexicalEditorOn(client), paragraphs);
     await serverCaughtUp(client);
   } finally {
     client.destroy();

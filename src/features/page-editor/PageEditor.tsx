@@ -184,10 +184,9 @@ export function PageEditor({ pageId, canEdit, me, embedRenderers = noRenderers }
           <CollaborationPlugin
             id={pageId}
             providerFactory={providerFactory}
-            // Only writers seed an empty page with its first paragraph. Two writers opening a brand-new
-            // page at the same instant can both seed one (an extra empty line); seeding on the server
-            // when it creates a page's document would remove that.
-            shouldBootstrap={canEdit}
+            // The server writes a new page's first paragraph before anyone gets the document
+            // (server/collab/firstParagraph.ts), so two editors opening it at once share that one.
+            shouldBootstrap={false}
             username={me.name}
             cursorColor={presenceColour(me.id)}
             awarenessData={awarenessData}
