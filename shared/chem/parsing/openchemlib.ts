@@ -1,5 +1,4 @@
 import type { Atom, Bond, BondOrder, MolGraph } from '../graph/types';
-import { buildAdjacency } from '../graph/adjacency';
 import { ChemInputError } from './errors';
 import { MAX_HEAVY_ATOMS, MAX_INPUT_CHARACTERS } from './limits';
 import { checkElement, checkSmilesSyntax } from './smiles-syntax';
@@ -9,6 +8,13 @@ type OclModule = typeof import('openchemlib');
 type OclMolecule = InstanceType<OclModule['Molecule']>;
 
 let ocl: OclModule | null = null;
+/**
+ * One parser and one scratch molecule serve every SMILES: a parse clears the molecule first, and
+ * nothing keeps it after `toGraph` (the canonical forms parse afresh), so the allocations of a
+ * new parser and molecule per input are saved.
+ */
+let smilesParser: InstanceType<OclModule['SmilesParser']> | null = null;
+let scratch: OclMolecule | null = null;
 
 /** openchemlib is ESM and slow to initialise, so it is imported on first need only. */
 export async function loadChemistry(): Promise<void> {
@@ -17,6 +23,8 @@ export async function loadChemistry(): Promise<void> {
   ocl = ((module as unknown as { default?: OclModule }).default ?? module) as OclModule;
   // The first molecule pays the one-time initialisation; do it here rather than on a user's input.
   ocl.Molecule.fromSmiles('CC');
+  smilesParser = new ocl.SmilesParser();
+  scratch = new ocl.Molecule(0, 0);
 }
 
 function library(): OclModule {
@@ -44,12 +52,12 @@ export function parseInput(input: ChemInput): ParsedMolecule {
     if (smiles === '') throw new ChemInputError('empty', 'the SMILES is empty');
     if (smiles.length > MAX_INPUT_CHARACTERS) tooLarge(`${smiles.length} characters`);
     checkSmilesSyntax(smiles);
-    // Without invented 2D coordinates the parse is ~40x faster and the stereo parities are the
-    // same (they come from @/@@ and / \\); the canonical forms below use a full parse.
-    molecule = guard(() => Molecule.fromSmiles(smiles, { noCoordinates: true }), 'SMILES');
-    full = () => Molecule.fromSmiles(smiles);
     // Parity perception is the costliest step and only marks (@, /, \\) can give parities.
     stereo = /[@/\\]/.test(smiles);
+    // Without invented 2D coordinates the parse is ~40x faster and the stereo parities are the
+    // same (they come from @/@@ and / \\); the canonical forms below use a full parse.
+    molecule = guard(() => smilesParser!.parseMolecule(smiles, { noCoordinates: true, noStereo: !stereo, molecule: scratch! }), 'SMILES');
+    full = () => Molecule.fromSmiles(smiles);
   } else {
     const text = input.molfile;
     if (text.trim() === '') throw new ChemInputError('empty', 'the molfile is empty');
@@ -85,19 +93,22 @@ function tooLarge(what: string): never {
  */
 function toGraph(mol: OclMolecule, hasCoordinates: boolean, stereo: boolean): MolGraph {
   const kept = mol.getAtoms(); // atoms before this index are everything except plain hydrogens
-  const heavy = Array.from({ length: kept }, (_, a) => a).filter((a) => mol.getAtomicNo(a) !== 1).length;
+  let heavy = 0;
+  for (let a = 0; a < kept; a++) if (mol.getAtomicNo(a) !== 1) heavy += 1;
   if (heavy > MAX_HEAVY_ATOMS) {
     throw new ChemInputError('too_large', `the molecule has ${heavy} non-hydrogen atoms; at most ${MAX_HEAVY_ATOMS} are accepted`);
   }
+  const isFragment = mol.isFragment();
   const atoms: Atom[] = [];
+  const adjacency: MolGraph['adjacency'] = [];
   for (let a = 0; a < kept; a++) {
     const symbol = mol.getAtomLabel(a);
     checkElement(symbol, null);
-    if (mol.getAtomicNo(a) === 0 || (mol.isFragment() && mol.getAtomList(a)?.length)) {
+    if (mol.getAtomicNo(a) === 0 || (isFragment && mol.getAtomList(a)?.length)) {
       throw new ChemInputError('unsupported_feature', 'query atoms (atom lists, R groups) are not supported');
     }
-    let plainHydrogens = 0;
-    for (let k = 0; k < mol.getAllConnAtoms(a); k++) if (mol.getConnAtom(a, k) >= kept) plainHydrogens += 1;
+    // Plain hydrogens come after all other neighbours in openchemlib's neighbour lists.
+    const plainHydrogens = mol.getAllConnAtoms(a) - mol.getConnAtoms(a);
     const mass = mol.getAtomMass(a);
     atoms.push({
       index: a,
@@ -111,10 +122,12 @@ function toGraph(mol: OclMolecule, hasCoordinates: boolean, stereo: boolean): Mo
       // openchemlib's y axis points down; molfiles' points up.
       position: hasCoordinates ? { x: mol.getAtomX(a), y: -mol.getAtomY(a), z: mol.getAtomZ(a) } : null,
     });
+    adjacency.push([]);
   }
   const bonds: Bond[] = [];
   const bondIndexOf = new Map<number, number>();
-  for (let b = 0; b < mol.getAllBonds(); b++) {
+  const bondCount = mol.getAllBonds();
+  for (let b = 0; b < bondCount; b++) {
     const from = mol.getBondAtom(0, b);
     const to = mol.getBondAtom(1, b);
     if (from >= kept || to >= kept) continue;
@@ -122,10 +135,14 @@ function toGraph(mol: OclMolecule, hasCoordinates: boolean, stereo: boolean): Mo
     if (order < 1 || order > 3) {
       throw new ChemInputError('unsupported_feature', `bond order ${order} between atoms ${from + 1} and ${to + 1} is not supported`);
     }
-    bondIndexOf.set(b, bonds.length);
-    bonds.push({ index: bonds.length, from, to, order: order as BondOrder, aromatic: mol.isAromaticBond(b), doubleBondStereo: null });
+    const index = bonds.length;
+    if (stereo) bondIndexOf.set(b, index);
+    bonds.push({ index, from, to, order: order as BondOrder, aromatic: mol.isAromaticBond(b), doubleBondStereo: null });
+    // Neighbour lists in bond order, as every part of the engine has always seen them.
+    adjacency[from].push({ atom: to, bond: index });
+    adjacency[to].push({ atom: from, bond: index });
   }
-  const graph: MolGraph = { atoms, bonds, adjacency: buildAdjacency(atoms.length, bonds), stereoNotes: [] };
+  const graph: MolGraph = { atoms, bonds, adjacency, stereoNotes: [] };
   if (stereo) {
     readTetrahedralParities(mol, graph, kept);
     readDoubleBondParities(mol, graph, kept, bondIndexOf);
