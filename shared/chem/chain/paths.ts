@@ -1,28 +1,68 @@
 import type { NamingContext } from '../numbering/context';
 import { isChainCarbon } from '../numbering/context';
 
-/** Acyclic carbon neighbours of an atom (chains never run through rings or heteroatoms). */
-function chainNeighbours(ctx: NamingContext, atom: number, blocked: number): number[] {
-  return ctx.graph.adjacency[atom].filter((e) => e.atom !== blocked && isChainCarbon(ctx, e.atom)).map((e) => e.atom);
+interface ChainNeighbours {
+  /** Acyclic carbon neighbours of every atom (chains never run through rings or heteroatoms). */
+  all: number[][];
+  /**
+   * The same without the carbons of prefix groups: the carbon of a -COOH group is not a chain atom
+   * inside a substituent, because as a prefix the whole group is 'carboxy' (2-carboxyethyl, P-65.1.5.1).
+   */
+  substituent: number[][];
 }
 
-/**
- * Chain neighbours inside a substituent group: the carbon of a -COOH group is not a chain atom
- * there, because as a prefix the whole group is 'carboxy' (2-carboxyethyl, P-65.1.5.1).
- */
-function substituentChainNeighbours(ctx: NamingContext, atom: number, blocked: number): number[] {
-  return chainNeighbours(ctx, atom, blocked).filter((a) => !ctx.groups.has(a));
+/** Chain searches ask for the same neighbours many times per molecule, so they are listed once. */
+const neighbourLists = new WeakMap<NamingContext, ChainNeighbours>();
+
+function chainNeighbourLists(ctx: NamingContext): ChainNeighbours {
+  let lists = neighbourLists.get(ctx);
+  if (!lists) {
+    const chainCarbon = ctx.graph.atoms.map((_, atom) => isChainCarbon(ctx, atom));
+    const all = ctx.graph.adjacency.map((edges) => edges.filter((e) => chainCarbon[e.atom]).map((e) => e.atom));
+    lists = { all, substituent: all.map((atoms) => atoms.filter((a) => !ctx.groups.has(a))) };
+    neighbourLists.set(ctx, lists);
+  }
+  return lists;
 }
 
 /** The atoms of the acyclic carbon tree containing `start`, and its leaves (atoms with one chain neighbour or none). */
-function carbonTree(ctx: NamingContext, start: number): { tree: number[]; leaves: number[] } {
-  const tree: number[] = [];
-  const seen = new Set<number>([start]);
-  for (let i = 0, queue = [start]; i < queue.length; i++) {
-    tree.push(queue[i]);
-    for (const next of chainNeighbours(ctx, queue[i], -1)) if (!seen.has(next)) (seen.add(next), queue.push(next));
+function carbonTree(neighbours: number[][], start: number): { tree: number[]; leaves: number[] } {
+  const tree = [start];
+  const seen = new Uint8Array(neighbours.length);
+  seen[start] = 1;
+  for (let i = 0; i < tree.length; i++) {
+    for (const next of neighbours[tree[i]]) if (!seen[next]) (seen[next] = 1), tree.push(next);
   }
-  return { tree, leaves: tree.filter((a) => chainNeighbours(ctx, a, -1).length <= 1) };
+  return { tree, leaves: tree.filter((a) => neighbours[a].length <= 1) };
+}
+
+/**
+ * Breadth-first search over a carbon tree from `leaf`: each atom's predecessor (-1 for the leaf)
+ * and its depth (1 for the leaf, 0 where not reached).
+ */
+function searchFrom(neighbours: number[][], leaf: number, queue: number[]): { parent: Int32Array; depth: Int32Array } {
+  const parent = new Int32Array(neighbours.length);
+  const depth = new Int32Array(neighbours.length);
+  parent[leaf] = -1;
+  depth[leaf] = 1;
+  queue.length = 0;
+  queue.push(leaf);
+  for (let i = 0; i < queue.length; i++) {
+    const atom = queue[i];
+    for (const next of neighbours[atom]) {
+      if (depth[next] !== 0) continue;
+      parent[next] = atom;
+      depth[next] = depth[atom] + 1;
+      queue.push(next);
+    }
+  }
+  return { parent, depth };
+}
+
+function pathTo(parent: Int32Array, end: number): number[] {
+  const path: number[] = [];
+  for (let a = end; a !== -1; a = parent[a]) path.push(a);
+  return path;
 }
 
 /**
@@ -31,31 +71,21 @@ function carbonTree(ctx: NamingContext, start: number): { tree: number[]; leaves
  * can be longest, so the search pairs leaves: breadth-first from every leaf.
  */
 export function longestParentChains(ctx: NamingContext, start: number): number[][] {
-  const { leaves } = carbonTree(ctx, start);
+  const neighbours = chainNeighbourLists(ctx).all;
+  const { leaves } = carbonTree(neighbours, start);
+  const queue: number[] = [];
   let best = 0;
-  let pairs: [number, number, Map<number, number>][] = [];
+  let pairs: [number, Int32Array][] = [];
   for (const leaf of leaves) {
-    const parent = new Map<number, number>([[leaf, -1]]);
-    const depth = new Map<number, number>([[leaf, 1]]);
-    for (let i = 0, queue = [leaf]; i < queue.length; i++) {
-      for (const next of chainNeighbours(ctx, queue[i], -1)) {
-        if (parent.has(next)) continue;
-        parent.set(next, queue[i]);
-        depth.set(next, depth.get(queue[i])! + 1);
-        queue.push(next);
-      }
-    }
+    const { parent, depth } = searchFrom(neighbours, leaf, queue);
     for (const other of leaves) {
-      const length = depth.get(other)!;
+      const length = depth[other];
       if (length > best) (best = length), (pairs = []);
-      if (length === best) pairs.push([leaf, other, parent]);
+      if (length === best) pairs.push([other, parent]);
     }
   }
-  return pairs.map(([, other, parent]) => {
-    const path: number[] = [];
-    for (let a = other; a !== -1; a = parent.get(a)!) path.push(a);
-    return path; // runs from `other` to `leaf`; the pair (other, leaf) supplies the reverse direction
-  });
+  // Each path runs from `other` to its leaf; the pair (other, leaf) supplies the reverse direction.
+  return pairs.map(([other, parent]) => pathTo(parent, other));
 }
 
 /**
@@ -65,26 +95,31 @@ export function longestParentChains(ctx: NamingContext, start: number): number[]
  * 'alkyl' method of general nomenclature: '1-methylbutyl').
  */
 export function longestSubstituentChains(ctx: NamingContext, atom: number, from: number, fromAttachment: boolean): number[][] {
-  const branches = substituentChainNeighbours(ctx, atom, from).map((first) => leafPaths(ctx, first, atom));
-  const longest = (paths: number[][]) => Math.max(0, ...paths.map((p) => p.length));
-  const arms = branches.map((paths) => ({ paths, length: longest(paths) }));
+  const neighbours = chainNeighbourLists(ctx).substituent;
+  const arms: { paths: number[][]; length: number }[] = [];
+  for (const first of neighbours[atom]) {
+    if (first === from) continue;
+    const paths = leafPaths(neighbours, first, atom);
+    arms.push({ paths, length: paths[0].length });
+  }
   const candidates: number[][] = [];
   const lengths = arms.map((a) => a.length).sort((a, b) => b - a);
   if (fromAttachment) {
     const best = lengths[0] ?? 0;
     if (best === 0) return [[atom]];
-    for (const arm of arms) for (const p of arm.paths) if (p.length === best) candidates.push([atom, ...p]);
+    for (const arm of arms) for (const p of arm.paths) if (p.length === best) candidates.push([atom].concat(p));
     return candidates;
   }
   const target = 1 + (lengths[0] ?? 0) + (lengths[1] ?? 0);
   if (arms.length === 0) return [[atom]];
   for (let i = 0; i < arms.length; i++) {
     for (const p of arms[i].paths) {
-      if (1 + p.length === target) candidates.push([atom, ...p], [...p].reverse().concat(atom));
+      const reversed = p.slice().reverse();
+      if (1 + p.length === target) candidates.push([atom].concat(p), reversed.concat(atom));
       for (let j = i + 1; j < arms.length; j++) {
         for (const q of arms[j].paths) {
           if (1 + p.length + q.length !== target) continue;
-          candidates.push([...[...p].reverse(), atom, ...q], [...[...q].reverse(), atom, ...p]);
+          candidates.push(reversed.concat(atom, q), q.slice().reverse().concat(atom, p));
         }
       }
     }
@@ -92,19 +127,25 @@ export function longestSubstituentChains(ctx: NamingContext, atom: number, from:
   return candidates;
 }
 
-/** Paths from `first` (reached from `from`) to every leaf of its branch, longest ones only. */
-function leafPaths(ctx: NamingContext, first: number, from: number): number[][] {
+/** Paths from `first` (reached from `from`) to every leaf of its branch, longest ones only (never empty). */
+function leafPaths(neighbours: number[][], first: number, from: number): number[][] {
   const result: number[][] = [];
-  const walk = (atom: number, previous: number, path: number[]) => {
-    path.push(atom);
-    const next = substituentChainNeighbours(ctx, atom, previous);
-    if (next.length === 0) result.push([...path]);
-    for (const n of next) walk(n, atom, path);
-    path.pop();
-  };
-  walk(first, from, []);
-  const best = Math.max(...result.map((p) => p.length));
+  walkToLeaves(neighbours, first, from, [], result);
+  let best = 0;
+  for (const p of result) best = Math.max(best, p.length);
   return result.filter((p) => p.length === best);
+}
+
+function walkToLeaves(neighbours: number[][], atom: number, previous: number, path: number[], result: number[][]): void {
+  path.push(atom);
+  let leaf = true;
+  for (const next of neighbours[atom]) {
+    if (next === previous) continue;
+    leaf = false;
+    walkToLeaves(neighbours, next, atom, path, result);
+  }
+  if (leaf) result.push(path.slice());
+  path.pop();
 }
 
 /**
@@ -114,30 +155,25 @@ function leafPaths(ctx: NamingContext, first: number, from: number): number[][] 
  * to leaf, because lengthening a chain never loses a group.
  */
 export function principalChains(ctx: NamingContext, start: number, weight: (atom: number) => number): number[][] {
-  const { leaves } = carbonTree(ctx, start);
+  const neighbours = chainNeighbourLists(ctx).all;
+  const { tree, leaves } = carbonTree(neighbours, start);
+  const weights = new Int32Array(neighbours.length);
+  for (const atom of tree) weights[atom] = weight(atom);
+  const groups = new Int32Array(neighbours.length);
+  const queue: number[] = [];
   let best = { groups: -1, length: 0 };
   let paths: number[][] = [];
   for (const leaf of leaves) {
-    const parent = new Map<number, number>([[leaf, -1]]);
-    const depth = new Map<number, number>([[leaf, 1]]);
-    const groups = new Map<number, number>([[leaf, weight(leaf)]]);
-    for (let i = 0, queue = [leaf]; i < queue.length; i++) {
-      for (const next of chainNeighbours(ctx, queue[i], -1)) {
-        if (parent.has(next)) continue;
-        parent.set(next, queue[i]);
-        depth.set(next, depth.get(queue[i])! + 1);
-        groups.set(next, groups.get(queue[i])! + weight(next));
-        queue.push(next);
-      }
-    }
+    const { parent, depth } = searchFrom(neighbours, leaf, queue);
+    // The queue holds the tree in search order, so each atom's predecessor comes before it.
+    groups[leaf] = weights[leaf];
+    for (let i = 1; i < queue.length; i++) groups[queue[i]] = groups[parent[queue[i]]] + weights[queue[i]];
     for (const other of leaves) {
-      const score = { groups: groups.get(other)!, length: depth.get(other)! };
+      const score = { groups: groups[other], length: depth[other] };
       const order = score.groups - best.groups || score.length - best.length;
       if (order < 0) continue;
       if (order > 0) (best = score), (paths = []);
-      const path: number[] = [];
-      for (let a = other; a !== -1; a = parent.get(a)!) path.push(a);
-      paths.push(path);
+      paths.push(pathTo(parent, other));
     }
   }
   return paths;
@@ -145,12 +181,13 @@ export function principalChains(ctx: NamingContext, start: number, weight: (atom
 
 /** One atom of every acyclic carbon tree (chains cannot cross rings or heteroatoms). */
 export function chainTrees(ctx: NamingContext): number[] {
+  const neighbours = chainNeighbourLists(ctx).all;
   const starts: number[] = [];
-  const seen = new Set<number>();
-  for (let atom = 0; atom < ctx.graph.atoms.length; atom++) {
-    if (seen.has(atom) || !isChainCarbon(ctx, atom)) continue;
+  const seen = new Uint8Array(neighbours.length);
+  for (let atom = 0; atom < neighbours.length; atom++) {
+    if (seen[atom] || !isChainCarbon(ctx, atom)) continue;
     starts.push(atom);
-    for (const a of carbonTree(ctx, atom).tree) seen.add(a);
+    for (const a of carbonTree(neighbours, atom).tree) seen[a] = 1;
   }
   return starts;
 }
