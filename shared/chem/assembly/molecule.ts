@@ -47,8 +47,9 @@ function nameOrRefuse(graph: MolGraph, style: NameStyle): Naming {
   const candidates = parentCandidates(ctx).map((s) => evaluate(ctx, s, null));
   const survivors = bestCandidates(candidates);
   refuseMultiplicativeCases(survivors);
-  const { name } = firstByName(survivors, (e) => renderUnit(ctx, e));
-  const tied = survivors.filter((e) => renderUnit(ctx, e) === name);
+  const names = new Map(survivors.map((e) => [e, renderUnit(ctx, e)]));
+  const { name } = firstByName(survivors, (e) => names.get(e)!);
+  const tied = survivors.filter((e) => names.get(e) === name);
   const retained = retainedBenzeneName(tied[0], style);
   if (retained) return { ok: true, name: retained, explanation: explainRetained(tied[0], retained) };
   if (!hasStereoMarks(graph)) return { ok: true, name, explanation: explain(ctx, tied[0]) };

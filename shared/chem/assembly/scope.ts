@@ -1,4 +1,4 @@
-import type { MolGraph } from '../graph/types';
+import type { Atom, MolGraph } from '../graph/types';
 import { NamingRefusal } from './refusal';
 
 const VALENCE: Record<string, number> = { C: 4 };
@@ -9,15 +9,19 @@ export function checkScope(graph: MolGraph): void {
   if (!graph.atoms.some((a) => a.element === 'C')) throw new NamingRefusal('compounds without carbon are not named (inorganic nomenclature)');
   if (componentCount(graph) > 1) throw new NamingRefusal('the structure has several disconnected parts (salts and mixtures are not named yet)');
   for (const atom of graph.atoms) {
-    const where = `atom ${atom.index + 1} (${atom.element})`;
-    if (atom.isotope !== null) throw new NamingRefusal(`isotope label at ${where}: isotopically modified compounds (P-8) are not named yet`);
-    if (atom.radicalElectrons > 0) throw new NamingRefusal(`unpaired electrons at ${where}: radicals are not named yet`);
+    if (atom.isotope !== null) throw new NamingRefusal(`isotope label at ${where(atom)}: isotopically modified compounds (P-8) are not named yet`);
+    if (atom.radicalElectrons > 0) throw new NamingRefusal(`unpaired electrons at ${where(atom)}: radicals are not named yet`);
     if (atom.element === 'C') {
-      if (atom.charge !== 0) throw new NamingRefusal(`charged carbon at ${where}: ions are not named yet`);
-      const bonds = graph.adjacency[atom.index].reduce((sum, e) => sum + graph.bonds[e.bond].order, 0);
-      if (bonds + atom.hydrogens !== VALENCE.C) throw new NamingRefusal(`${where} has ${bonds + atom.hydrogens} bonds; only tetravalent carbon is named`);
+      if (atom.charge !== 0) throw new NamingRefusal(`charged carbon at ${where(atom)}: ions are not named yet`);
+      let bonds = 0;
+      for (const e of graph.adjacency[atom.index]) bonds += graph.bonds[e.bond].order;
+      if (bonds + atom.hydrogens !== VALENCE.C) throw new NamingRefusal(`${where(atom)} has ${bonds + atom.hydrogens} bonds; only tetravalent carbon is named`);
     }
   }
+}
+
+function where(atom: Atom): string {
+  return `atom ${atom.index + 1} (${atom.element})`;
 }
 
 function componentCount(graph: MolGraph): number {

@@ -25,7 +25,7 @@ export interface NamingContext {
   /** Every occurrence of the principal characteristic group (empty when there is none). */
   principal: PrincipalGroup[];
   /** Memo of substituent names, keyed by attachment atom and the parent atom it hangs from. */
-  substituents: Map<string, SubstituentName>;
+  substituents: Map<number, SubstituentName>;
 }
 
 /** A candidate parent hydride (or substituent parent) in locant order: atoms[0] has locant 1. */

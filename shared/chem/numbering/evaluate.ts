@@ -37,7 +37,8 @@ export function evaluate(ctx: NamingContext, skeleton: Skeleton, attachment: Att
   }
   const prefixes: Prefix[] = [];
   const principal: Evaluated['principal'] = [];
-  atoms.forEach((atom, i) => {
+  for (let i = 0; i < atoms.length; i++) {
+    const atom = atoms[i];
     for (const { atom: next } of graph.adjacency[atom]) {
       if (inSkeleton.has(next)) continue;
       if (attachment && atom === attachment.atom && next === attachment.from) continue;
@@ -51,17 +52,22 @@ export function evaluate(ctx: NamingContext, skeleton: Skeleton, attachment: Att
       }
       prefixes.push({ locant: i + 1, substituent: nameSubstituent(ctx, next, atom) });
     }
-  });
+  }
   const freeValence = attachment ? [atoms.indexOf(attachment.atom) + 1] : [];
-  const ascending = (values: number[]) => values.sort((x, y) => x - y);
   const keys = {
-    principal: ascending(principal.map((p) => p.locant)),
-    multiple: ascending(multiple.map((m) => m.locant)),
-    double: ascending(multiple.filter((m) => m.order === 2).map((m) => m.locant)),
-    prefixes: ascending(prefixes.map((p) => p.locant)),
+    principal: ascendingLocants(principal),
+    multiple: ascendingLocants(multiple),
+    double: ascendingLocants(multiple.filter((m) => m.order === 2)),
+    prefixes: ascendingLocants(prefixes),
     citation: null,
   };
   return { skeleton, attachment, freeValence, multiple, prefixes, principal, closesRing, keys };
+}
+
+function ascendingLocants(items: { locant: number }[]): number[] {
+  const locants = new Array<number>(items.length);
+  for (let i = 0; i < items.length; i++) locants[i] = items[i].locant;
+  return locants.sort((x, y) => x - y);
 }
 
 /**

@@ -49,14 +49,15 @@ const CRITERIA: Comparator[] = [
 
 export function bestCandidates(candidates: Evaluated[], extra: Comparator[] = []): Evaluated[] {
   let survivors = candidates;
-  const apply = (criterion: Comparator) => {
-    let best = survivors[0];
-    for (const c of survivors) if (criterion(c, best) < 0) best = c;
-    survivors = survivors.filter((c) => criterion(c, best) === 0);
-  };
-  for (const criterion of extra) if (survivors.length > 1) apply(criterion);
-  for (const criterion of CRITERIA) if (survivors.length > 1) apply(criterion);
+  for (const criterion of extra) if (survivors.length > 1) survivors = keepBest(survivors, criterion);
+  for (const criterion of CRITERIA) if (survivors.length > 1) survivors = keepBest(survivors, criterion);
   return survivors;
+}
+
+function keepBest(candidates: Evaluated[], criterion: Comparator): Evaluated[] {
+  let best = candidates[0];
+  for (const c of candidates) if (criterion(c, best) < 0) best = c;
+  return candidates.filter((c) => criterion(c, best) === 0);
 }
 
 /** P-45.5: among candidates the rules cannot separate, the name first in alphanumerical order. */

@@ -8,7 +8,13 @@ export function ringNumberings(graph: MolGraph, cycle: number[], start: number |
   const result: Skeleton[] = [];
   for (let i = 0; i < n; i++) {
     if (start !== null && cycle[i] !== start) continue;
-    for (const step of [1, -1]) result.push({ kind, atoms: Array.from({ length: n }, (_, k) => cycle[(i + step * k + n * n) % n]) });
+    const forward = new Array<number>(n);
+    const backward = new Array<number>(n);
+    for (let k = 0; k < n; k++) {
+      forward[k] = cycle[(i + k) % n];
+      backward[k] = cycle[(i - k + n) % n];
+    }
+    result.push({ kind, atoms: forward }, { kind, atoms: backward });
   }
   return result;
 }

@@ -20,7 +20,7 @@ import { retainedPrefix } from './retained';
  * applied to the group).
  */
 export function nameSubstituent(ctx: NamingContext, atom: number, from: number): SubstituentName {
-  const key = `${atom}<${from}`;
+  const key = atom * ctx.graph.atoms.length + from;
   const known = ctx.substituents.get(key);
   if (known) return known;
   const result = build(ctx, atom, from);
