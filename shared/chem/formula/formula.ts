@@ -5,10 +5,9 @@ import { ATOMIC_WEIGHT, MOST_ABUNDANT, NUCLIDE_MASS } from './elements';
 /** Element counts, hydrogens included (isotope labels counted under their element). */
 export function elementCounts(graph: MolGraph): Map<string, number> {
   const counts = new Map<string, number>();
-  const add = (element: string, n: number) => counts.set(element, (counts.get(element) ?? 0) + n);
   for (const atom of graph.atoms) {
-    add(atom.element, 1);
-    if (atom.hydrogens > 0) add('H', atom.hydrogens);
+    counts.set(atom.element, (counts.get(atom.element) ?? 0) + 1);
+    if (atom.hydrogens > 0) counts.set('H', (counts.get('H') ?? 0) + atom.hydrogens);
   }
   return counts;
 }
@@ -20,12 +19,20 @@ export function elementCounts(graph: MolGraph): Map<string, number> {
  */
 export function hillFormula(graph: MolGraph): string {
   const counts = elementCounts(graph);
-  const part = (element: string) => element + (counts.get(element)! > 1 ? counts.get(element) : '');
-  const others = [...counts.keys()].filter((e) => !(counts.has('C') && (e === 'C' || e === 'H'))).sort();
-  const head = counts.has('C') ? ['C', ...(counts.has('H') ? ['H'] : [])] : [];
-  const charge = graph.atoms.reduce((sum, atom) => sum + atom.charge, 0);
+  const hasCarbon = counts.has('C');
+  const others: string[] = [];
+  for (const element of counts.keys()) if (!(hasCarbon && (element === 'C' || element === 'H'))) others.push(element);
+  others.sort();
+  const order = hasCarbon ? (counts.has('H') ? ['C', 'H'] : ['C']).concat(others) : others;
+  let text = '';
+  for (const element of order) {
+    const count = counts.get(element)!;
+    text += count > 1 ? element + count : element;
+  }
+  let charge = 0;
+  for (const atom of graph.atoms) charge += atom.charge;
   const chargeText = charge === 0 ? '' : `${Math.abs(charge) > 1 ? Math.abs(charge) : ''}${charge > 0 ? '+' : '-'}`;
-  return [...head, ...others].map(part).join('') + chargeText;
+  return text + chargeText;
 }
 
 function nuclideMass(element: string, massNumber: number): number {

@@ -1,13 +1,15 @@
 import { ChemInputError } from './errors';
 import { ALL_ELEMENTS, MAX_HEAVY_ATOMS, ORGANIC_ELEMENTS } from './limits';
 
+/** An organic-subset atom starting exactly at `lastIndex` (sticky: no copy of the rest of the string). */
+const ORGANIC = /Cl|Br|B|C|N|O|P|S|F|I|b|c|n|o|p|s/y;
+
 /**
  * Checks SMILES syntax (OpenSMILES grammar) before openchemlib sees the string, because that
  * parser silently accepts some broken input (an unclosed branch, a stray character). Reports
  * the 1-based position and what is wrong, and enforces the element and size limits.
  */
 export function checkSmilesSyntax(smiles: string): void {
-  const organic = /^(Cl|Br|B|C|N|O|P|S|F|I|b|c|n|o|p|s)/;
   const bracket = /^\[(\d+)?([A-Z][a-z]?|se|as|[bcnops]|\*)(@@?|@TH[12]|@AL[12]|@SP[123]|@TB\d{1,2}|@OH\d{1,2})?(H\d?)?((?:\+\+?|--?)\d*)?(:\d+)?\]/;
   const openRings = new Map<string, number>();
   const branches: number[] = [];
@@ -23,7 +25,6 @@ export function checkSmilesSyntax(smiles: string): void {
 
   while (i < smiles.length) {
     const ch = smiles[i];
-    const rest = smiles.slice(i, i + 40);
     if (/\s/.test(ch)) fail(`unexpected space ${at(i)}`);
     if (ch === '[') {
       const close = smiles.indexOf(']', i);
@@ -39,7 +40,8 @@ export function checkSmilesSyntax(smiles: string): void {
       pendingBond = -1;
       continue;
     }
-    const organicMatch = organic.exec(rest);
+    ORGANIC.lastIndex = i;
+    const organicMatch = ORGANIC.exec(smiles);
     if (organicMatch) {
       heavyAtoms += 1;
       i += organicMatch[0].length;
@@ -50,7 +52,7 @@ export function checkSmilesSyntax(smiles: string): void {
     }
     if (ch === '*') fail(`wildcard atom '*' ${at(i)} is not supported`);
     if (/[A-Za-z]/.test(ch)) {
-      const symbol = /^[A-Z][a-z]?/.exec(rest)?.[0] ?? ch;
+      const symbol = /^[A-Z][a-z]?/.exec(smiles.slice(i, i + 2))?.[0] ?? ch;
       if (ALL_ELEMENTS.has(symbol) && !ORGANIC_ELEMENTS.has(symbol)) {
         fail(`element ${symbol} ${at(i)} must be written in brackets ([${symbol}])`);
       }
