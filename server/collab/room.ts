@@ -425,7 +425,10 @@ export class Room {
       conn.ws.close(CLOSE_MALFORMED, 'malformed awareness update');
       return;
     }
-    if (own.length > 0) awarenessProtocol.applyAwarenessUpdate(this.awareness, encodeAwarenessEntries(own), conn);
+    if (own.length > 0) {
+      const named = own.map((entry) => withSignedInName(entry, conn.user.name));
+      awarenessProtocol.applyAwarenessUpdate(this.awareness, encodeAwarenessEntries(named), conn);
+    }
   }
 
   /**
@@ -588,4 +591,15 @@ interface AwarenessChanges {
 
 function logFailure(what: string) {
   return (error: unknown) => console.error(`[collab] ${what} failed:`, error);
+}
+
+/**
+ * The name shown beside a cursor (the editor's `name` field) is the signed-in person's, whatever
+ * the client claimed: presence must not let anyone appear as someone else.
+ */
+function withSignedInName(entry: AwarenessEntry, name: string): AwarenessEntry {
+  if (entry.removed) return entry;
+  const state = JSON.parse(entry.state) as unknown;
+  if (typeof state !== 'object' || state === null || !('name' in state)) return entry;
+  return { ...entry, state: JSON.stringify({ ...state, name }) };
 }

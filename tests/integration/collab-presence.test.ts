@@ -113,6 +113,20 @@ describe('presence cannot be spoofed', () => {
     );
   });
 
+  it('shows the signed-in name beside a cursor, whatever name the client claims', async () => {
+    const { victim, intruder, observer } = await threeOnAPage('Presence impersonation');
+    // The editor's cursor label is the top-level `name` field of its presence state.
+    intruder.provider.awareness.setLocalStateField('name', 'Imke Sallow');
+    victim.provider.awareness.setLocalStateField('name', 'Imke Sallow');
+    await waitFor(
+      () => stateAt(observer, intruder.doc.clientID)?.name !== undefined && stateAt(observer, victim.doc.clientID)?.name !== undefined,
+      'both cursor names at the observer',
+    );
+    // chemist2@ is Rafe Mossgiel and chemist@ is Imke Sallow in the demo group (server/seed/demoPeople.ts).
+    expect(stateAt(observer, intruder.doc.clientID)?.name).toBe('Rafe Mossgiel');
+    expect(stateAt(observer, victim.doc.clientID)?.name).toBe('Imke Sallow');
+  });
+
   it('drops entries a connection invents beyond the one it introduced itself with', async () => {
     const { intruder, observer } = await threeOnAPage('Presence invented');
     const invented = 424242;
