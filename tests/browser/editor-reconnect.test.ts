@@ -74,8 +74,7 @@ afterAll(async () => {
 
 describe('page editor, connection lost and back', () => {
   it('keeps both chemists writing while the server is away and merges both edits when it is back', async () => {
-    // One after the other: two editors that open an empty page at the same moment may each add the
-    // page's first paragraph (the collaboration plugin's bootstrap), leaving a stray empty one.
+    // A shared line stored before the second editor opens, so both start from the same state.
     const first = await openPage('chemist@saltmarsh.test');
     await pageText(first).click();
     await first.keyboard.type(before);
