@@ -1,5 +1,5 @@
-import { DecoratorNode, type LexicalParseJSON, type NodeKey, type SerializedLexicalNode, type SerializedPartial, type Spread } from 'lexical';
-import { textOf } from './structureNode';
+import type { LexicalParseJSON, NodeKey, SerializedLexicalNode, SerializedPartial, Spread } from 'lexical';
+import { BlockNode, textOf } from './blockNode';
 
 /**
  * An attached file shown inside the page text (e.g. a spectrum), optionally tied to one of the
@@ -16,7 +16,7 @@ export type SerializedAttachmentEmbedNode = Spread<AttachmentEmbedFields, Serial
 
 export const ATTACHMENT_EMBED_NODE_TYPE = 'attachment-embed';
 
-export class AttachmentEmbedNode extends DecoratorNode<unknown> {
+export class AttachmentEmbedNode extends BlockNode<AttachmentEmbedFields> {
   __attachmentId: string;
   __linkedStructureKey: string | null;
 
@@ -56,30 +56,8 @@ export class AttachmentEmbedNode extends DecoratorNode<unknown> {
     return writable;
   }
 
-  exportJSON(): SerializedAttachmentEmbedNode {
-    return { ...super.exportJSON(), ...this.fields() };
-  }
-
-  createDOM(): HTMLElement {
-    const element = document.createElement('div');
-    element.dataset.block = ATTACHMENT_EMBED_NODE_TYPE;
-    return element;
-  }
-
-  updateDOM(): false {
-    return false;
-  }
-
-  isInline(): false {
-    return false;
-  }
-
   getTextContent(): string {
     return `[attachment ${this.fields().attachmentId}]\n`;
-  }
-
-  decorate(): unknown {
-    return null;
   }
 }
 

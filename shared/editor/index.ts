@@ -1,3 +1,4 @@
+export * from './blockNode';
 export * from './structureNode';
 export * from './attachmentEmbedNode';
 export * from './reagentsNode';

@@ -1,5 +1,5 @@
-import { DecoratorNode, type LexicalParseJSON, type NodeKey, type SerializedLexicalNode, type SerializedPartial, type Spread } from 'lexical';
-import { textOf } from './structureNode';
+import type { LexicalParseJSON, NodeKey, SerializedLexicalNode, SerializedPartial, Spread } from 'lexical';
+import { BlockNode, textOf } from './blockNode';
 
 /**
  * A reagent table on a page, without any React (the server projects pages with this class; the
@@ -60,7 +60,7 @@ export function reagentRowsText(rows: ReagentRow[]): string {
   return `[reagents]\n${lines.map((line) => `${line}\n`).join('')}`;
 }
 
-export class ReagentsNode extends DecoratorNode<unknown> {
+export class ReagentsNode extends BlockNode<ReagentsFields> {
   __rows: ReagentRow[];
 
   static getType(): string {
@@ -96,30 +96,8 @@ export class ReagentsNode extends DecoratorNode<unknown> {
     return writable;
   }
 
-  exportJSON(): SerializedReagentsNode {
-    return { ...super.exportJSON(), ...this.fields() };
-  }
-
-  createDOM(): HTMLElement {
-    const element = document.createElement('div');
-    element.dataset.block = REAGENTS_NODE_TYPE;
-    return element;
-  }
-
-  updateDOM(): false {
-    return false;
-  }
-
-  isInline(): false {
-    return false;
-  }
-
   getTextContent(): string {
     return reagentRowsText(this.fields().rows);
-  }
-
-  decorate(): unknown {
-    return null;
   }
 }
 

@@ -1,4 +1,5 @@
-import { DecoratorNode, type LexicalParseJSON, type NodeKey, type SerializedLexicalNode, type SerializedPartial, type Spread } from 'lexical';
+import type { LexicalParseJSON, NodeKey, SerializedLexicalNode, SerializedPartial, Spread } from 'lexical';
+import { BlockNode, textOf } from './blockNode';
 
 /**
  * The page's structure block, without any React: the server registers this class in a headless
@@ -21,12 +22,7 @@ export type SerializedStructureNode = Spread<StructureFields, SerializedLexicalN
 
 export const STRUCTURE_NODE_TYPE = 'structure';
 
-/** Parsed JSON is untrusted: anything but a string becomes empty. */
-export function textOf(value: unknown): string {
-  return typeof value === 'string' ? value : '';
-}
-
-export class StructureNode extends DecoratorNode<unknown> {
+export class StructureNode extends BlockNode<StructureFields> {
   __structureKey: string;
   __molfile: string;
   __smiles: string;
@@ -76,32 +72,10 @@ export class StructureNode extends DecoratorNode<unknown> {
     return writable;
   }
 
-  exportJSON(): SerializedStructureNode {
-    return { ...super.exportJSON(), ...this.fields() };
-  }
-
-  createDOM(): HTMLElement {
-    const element = document.createElement('div');
-    element.dataset.block = STRUCTURE_NODE_TYPE;
-    return element;
-  }
-
-  updateDOM(): false {
-    return false;
-  }
-
-  isInline(): false {
-    return false;
-  }
-
   /** Plain-text projection: the label and SMILES, so search finds structures by either. */
   getTextContent(): string {
     const { label, smiles } = this.fields();
     return `[structure${label ? ` ${label}` : ''}: ${smiles}]\n`;
-  }
-
-  decorate(): unknown {
-    return null;
   }
 }
 
