@@ -1,8 +1,7 @@
-import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import type { Browser, Page } from 'playwright-core';
-import { DEMO_PASSWORD, signedIn } from '../support/api';
-import { launchBrowser, signIn } from '../support/browser';
-import { startServer, type TestServer } from '../support/server';
+import { beforeAll, describe, expect, it } from 'vitest';
+import type { Page } from 'playwright-core';
+import { browserFrame } from '../support/browser';
+import { newDemoNotebookPage } from '../support/fixtures';
 
 // Block-level editing in real Chromium against the real server: a dropped .mol file, the
 // drawing pad, the block menu and our keyboard map. Build the client first (`npx vite build`).
@@ -27,27 +26,12 @@ const methylbutaneMolfile = [
   '',
 ].join('\n');
 
-let server: TestServer;
-let browser: Browser;
+const frame = browserFrame();
 let page: Page;
 
 beforeAll(async () => {
-  server = await startServer();
-  browser = await launchBrowser();
-  const api = await signedIn(server.url, 'chemist@saltmarsh.test');
-  const notebooks = await api.get<{ id: string; title: string }[]>('/api/notebooks');
-  const notebook = notebooks.body.find((n) => n.title === 'Fruity esters from short-chain acids')!;
-  const created = await api.post<{ id: string }>(`/api/notebooks/${notebook.id}/pages`, { title: `Blocks ${Date.now()}` });
-  const context = await browser.newContext({ viewport: { width: 1400, height: 1000 } });
-  page = await context.newPage();
-  await signIn(page, server.url, 'chemist@saltmarsh.test', DEMO_PASSWORD);
-  await page.goto(`${server.url}/pages/${created.body.id}`);
-  await page.locator('[data-testid="connection-state"][data-phase="live"]').waitFor({ timeout: 20_000 });
-});
-
-afterAll(async () => {
-  await browser?.close();
-  await server?.close();
+  const pageId = await newDemoNotebookPage(frame.server.url, `Blocks ${Date.now()}`);
+  page = await frame.openPage(pageId, 'chemist@saltmarsh.test');
 });
 
 describe('page editor blocks', () => {

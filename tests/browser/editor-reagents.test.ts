@@ -1,29 +1,17 @@
-import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import type { Browser, BrowserContext, Locator, Page } from 'playwright-core';
+import { beforeAll, describe, expect, it } from 'vitest';
+import type { Locator, Page } from 'playwright-core';
 import { getCollabHub } from '../../server/collab';
-import { DEMO_PASSWORD, signedIn } from '../support/api';
-import { launchBrowser, signIn } from '../support/browser';
-import { startServer, type TestServer } from '../support/server';
+import { browserFrame } from '../support/browser';
+import { newDemoNotebookPage } from '../support/fixtures';
 import { reference } from '../unit/chem/support/rdkit';
 
 // The reagent list in real Chromium against the real server: one chemist inserts it from the
 // block menu and fills a row, a second chemist sees it live, the demo viewer reads it. Build the
 // client first (`npx vite build`). The hazard note is invented test text, not hazard data.
 
-let server: TestServer;
-let browser: Browser;
+const frame = browserFrame();
 let pageId: string;
-const contexts: BrowserContext[] = [];
-
-async function openPage(email: string): Promise<Page> {
-  const context = await browser.newContext({ viewport: { width: 1400, height: 1000 } });
-  contexts.push(context);
-  const page = await context.newPage();
-  await signIn(page, server.url, email, DEMO_PASSWORD);
-  await page.goto(`${server.url}/pages/${pageId}`);
-  await page.locator('[data-testid="connection-state"][data-phase="live"]').waitFor({ timeout: 20_000 });
-  return page;
-}
+const openPage = (email: string) => frame.openPage(pageId, email);
 
 /** A field of a reagent row by its exact label ("Reagent" is also part of "Remove this reagent"). */
 const cell = (row: Locator, label: string) => row.getByLabel(label, { exact: true });
@@ -32,20 +20,8 @@ let first: Page;
 let second: Page;
 
 beforeAll(async () => {
-  server = await startServer();
-  browser = await launchBrowser();
-  const api = await signedIn(server.url, 'chemist@saltmarsh.test');
-  const notebooks = await api.get<{ id: string; title: string }[]>('/api/notebooks');
-  const notebook = notebooks.body.find((n) => n.title === 'Fruity esters from short-chain acids')!;
-  const created = await api.post<{ id: string }>(`/api/notebooks/${notebook.id}/pages`, { title: `Reagents ${Date.now()}` });
-  pageId = created.body.id;
+  pageId = await newDemoNotebookPage(frame.server.url, `Reagents ${Date.now()}`);
   [first, second] = await Promise.all([openPage('chemist@saltmarsh.test'), openPage('chemist2@saltmarsh.test')]);
-});
-
-afterAll(async () => {
-  for (const context of contexts) await context.close();
-  await browser?.close();
-  await server?.close();
 });
 
 describe('reagent list', () => {
@@ -89,7 +65,7 @@ describe('reagent list', () => {
     await second.screenshot({ path: '/tmp/editor-reagents.png', fullPage: true });
 
     // The server's projection (what signatures cover) lists the row with its hazard notes.
-    const content = await getCollabHub(server.deps).currentContent(pageId);
+    const content = await getCollabHub(frame.server.deps).currentContent(pageId);
     expect(content.text).toContain('[reagents]\n- ethanol; SMILES CCO; 12.0 mL; 3.0 equiv; hazard notes: H225 test note entered by hand\n');
   });
 

@@ -1,8 +1,8 @@
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { eq } from 'drizzle-orm';
-import type { Browser, BrowserContext, Page } from 'playwright-core';
-import { DEMO_PASSWORD, signedIn } from '../support/api';
-import { launchBrowser, signIn } from '../support/browser';
+import type { Browser, Page } from 'playwright-core';
+import { closeBrowser, launchBrowser, openEditorPage } from '../support/browser';
+import { newDemoNotebookPage } from '../support/fixtures';
 import { startServer, type TestServer } from '../support/server';
 import { freePort } from '../../server/services/ports';
 import { pageContent } from '../../server/db/schema';
@@ -17,21 +17,12 @@ let port: number;
 let server: TestServer | null = null;
 let browser: Browser;
 let pageId: string;
-const contexts: BrowserContext[] = [];
 
 const serverUrl = () => `http://127.0.0.1:${port}`;
 const pageText = (page: Page) => page.getByTestId('page-text');
 const badge = (page: Page) => page.getByTestId('connection-state');
 
-async function openPage(email: string): Promise<Page> {
-  const context = await browser.newContext({ viewport: { width: 1400, height: 1000 } });
-  contexts.push(context);
-  const page = await context.newPage();
-  await signIn(page, serverUrl(), email, DEMO_PASSWORD);
-  await page.goto(`${serverUrl()}/pages/${pageId}`);
-  await page.locator('[data-testid="connection-state"][data-phase="live"]').waitFor({ timeout: 20_000 });
-  return page;
-}
+const openPage = (email: string) => openEditorPage(browser, serverUrl(), pageId, email);
 
 /** A new paragraph after the page's last one, with the text typed into it. */
 async function typeNewParagraph(page: Page, text: string) {
@@ -57,18 +48,11 @@ beforeAll(async () => {
   port = await freePort();
   server = await startServer({ PORT: String(port) });
   browser = await launchBrowser();
-  const api = await signedIn(serverUrl(), 'chemist@saltmarsh.test');
-  const notebooks = await api.get<{ id: string; title: string }[]>('/api/notebooks');
-  const notebook = notebooks.body.find((n) => n.title === 'Fruity esters from short-chain acids');
-  if (!notebook) throw new Error('demo notebook missing');
-  const created = await api.post<{ id: string }>(`/api/notebooks/${notebook.id}/pages`, { title: `Reconnect ${Date.now()}` });
-  expect(created.status).toBe(201);
-  pageId = created.body.id;
+  pageId = await newDemoNotebookPage(serverUrl(), `Reconnect ${Date.now()}`);
 });
 
 afterAll(async () => {
-  for (const context of contexts) await context.close();
-  await browser?.close();
+  await closeBrowser(browser);
   await server?.close();
 });
 

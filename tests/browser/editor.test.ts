@@ -1,30 +1,18 @@
-import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import type { Browser, BrowserContext, Page } from 'playwright-core';
-import { DEMO_PASSWORD, signedIn, type ApiClient } from '../support/api';
-import { launchBrowser, signIn } from '../support/browser';
+import { beforeAll, describe, expect, it } from 'vitest';
+import type { Page } from 'playwright-core';
+import { signedIn } from '../support/api';
+import { browserFrame } from '../support/browser';
+import { newDemoNotebookPage } from '../support/fixtures';
 import { getCollabHub } from '../../server/collab';
-import { startServer, type TestServer } from '../support/server';
 import { reference } from '../unit/chem/support/rdkit';
 
 // The page editor in real headless Chromium against the real server (API + /collab websocket),
 // which serves the built client from dist/client: run `npx vite build` first. Two demo chemists
 // share one fresh page; the demo viewer reads it.
 
-let server: TestServer;
-let browser: Browser;
-let chemistApi: ApiClient;
+const frame = browserFrame();
 let pageId: string;
-const contexts: BrowserContext[] = [];
-
-async function openPage(email: string): Promise<Page> {
-  const context = await browser.newContext({ viewport: { width: 1400, height: 1000 } });
-  contexts.push(context);
-  const page = await context.newPage();
-  await signIn(page, server.url, email, DEMO_PASSWORD);
-  await page.goto(`${server.url}/pages/${pageId}`);
-  await page.locator('[data-testid="connection-state"][data-phase="live"]').waitFor({ timeout: 20_000 });
-  return page;
-}
+const openPage = (email: string) => frame.openPage(pageId, email);
 
 const pageText = (page: Page) => page.getByTestId('page-text');
 
@@ -57,22 +45,8 @@ let first: Page;
 let second: Page;
 
 beforeAll(async () => {
-  server = await startServer();
-  browser = await launchBrowser();
-  chemistApi = await signedIn(server.url, 'chemist@saltmarsh.test');
-  const notebooks = await chemistApi.get<{ id: string; title: string }[]>('/api/notebooks');
-  const notebook = notebooks.body.find((n) => n.title === 'Fruity esters from short-chain acids');
-  if (!notebook) throw new Error('demo notebook missing');
-  const created = await chemistApi.post<{ id: string }>(`/api/notebooks/${notebook.id}/pages`, { title: `Shared editing ${Date.now()}` });
-  expect(created.status).toBe(201);
-  pageId = created.body.id;
+  pageId = await newDemoNotebookPage(frame.server.url, `Shared editing ${Date.now()}`);
   [first, second] = await Promise.all([openPage('chemist@saltmarsh.test'), openPage('chemist2@saltmarsh.test')]);
-});
-
-afterAll(async () => {
-  for (const context of contexts) await context.close();
-  await browser?.close();
-  await server?.close();
 });
 
 describe('page editor, two chemists on one page', () => {
@@ -88,7 +62,7 @@ describe('page editor, two chemists on one page', () => {
 
     const people = first.getByRole('list', { name: 'On this page now' });
     await expect.poll(() => people.getByRole('listitem').count(), { timeout: 15_000 }).toBe(2);
-    const me2 = await (await signedIn(server.url, 'chemist2@saltmarsh.test')).get<{ name: string }>('/api/me');
+    const me2 = await (await signedIn(frame.server.url, 'chemist2@saltmarsh.test')).get<{ name: string }>('/api/me');
     await expect(people.textContent()).resolves.toContain(me2.body.name);
 
     await first.screenshot({ path: '/tmp/editor-two-people.png', fullPage: true });
@@ -147,7 +121,7 @@ describe('page editor, two chemists on one page', () => {
 
 describe('page history', () => {
   it('lists saved versions and opens one read only with the text of that moment', async () => {
-    await getCollabHub(server.deps).takeSnapshot(pageId, 'activity');
+    await getCollabHub(frame.server.deps).takeSnapshot(pageId, 'activity');
     await typeAtEnd(first, ' Written after the snapshot.');
     await expect.poll(() => pageText(second).textContent(), { timeout: 15_000 }).toContain('Written after the snapshot.');
 

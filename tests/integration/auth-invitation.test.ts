@@ -1,25 +1,18 @@
-import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { describe, expect, it } from 'vitest';
 import { ApiClient, signedIn } from '../support/api';
-import { latestMailTo, sessionCookieOf, tokenFromLink, uniqueEmail } from '../support/fixtures';
-import { startServer, type TestServer } from '../support/server';
+import { adminFrame, latestMailTo, sessionCookieOf, tokenFromLink, uniqueEmail } from '../support/fixtures';
 
 // Invitations go through nodemailer to the suite's real mail catcher (smtp-server), which files
 // them in caught_mail; the test reads them back through the admins' mail view.
 // Single-use, expiring links: OWASP Forgot Password Cheat Sheet, "URL Tokens" (the same advice
 // applies to any e-mailed link that lets someone set a password).
-let server: TestServer;
-let admin: ApiClient;
-beforeAll(async () => {
-  server = await startServer();
-  admin = await signedIn(server.url, 'admin@saltmarsh.test');
-});
-afterAll(() => server.close());
+const frame = adminFrame();
 
 async function invite(role: string, prefix = 'invitee') {
   const email = uniqueEmail(prefix);
-  const response = await admin.post('/api/invitations', { email, name: 'Wren Tolliver', role });
+  const response = await frame.admin.post('/api/invitations', { email, name: 'Wren Tolliver', role });
   expect(response.status).toBe(201);
-  const mail = await latestMailTo(admin, email);
+  const mail = await latestMailTo(frame.admin, email);
   expect(mail).toBeDefined();
   return { email, invitation: response.body, mail: mail!, token: tokenFromLink(mail!.text, 'invite') };
 }
@@ -29,9 +22,9 @@ describe('invitation end to end', () => {
     const { email, invitation, mail, token } = await invite('chemist');
     expect(invitation).toMatchObject({ email, name: 'Wren Tolliver', role: 'chemist', acceptedAt: null });
     expect(mail.subject).toMatch(/invited you/);
-    expect(mail.text).toContain(`${server.deps.config.publicUrl}/invite/${token}`);
+    expect(mail.text).toContain(`${frame.server.deps.config.publicUrl}/invite/${token}`);
 
-    const visitor = new ApiClient(server.url);
+    const visitor = new ApiClient(frame.server.url);
     const shown = await visitor.get(`/api/auth/invitations/${token}`);
     expect(shown.status).toBe(200);
     expect(shown.body).toEqual({ email, name: 'Wren Tolliver', role: 'chemist' });
@@ -43,39 +36,39 @@ describe('invitation end to end', () => {
     expect((await visitor.get('/api/me')).body.email).toBe(email);
 
     // The chosen password works for a normal sign-in too.
-    expect((await signedIn(server.url, email, 'a-brand-new-password')).sessionCookie).not.toBe('');
+    expect((await signedIn(frame.server.url, email, 'a-brand-new-password')).sessionCookie).not.toBe('');
 
-    const listed = (await admin.get('/api/invitations')).body.find((i: { email: string }) => i.email === email);
+    const listed = (await frame.admin.get('/api/invitations')).body.find((i: { email: string }) => i.email === email);
     expect(listed.acceptedAt).not.toBeNull();
   });
 
   it('takes the name the invitee gives when accepting', async () => {
     const { token } = await invite('supervisor');
-    const accepted = await new ApiClient(server.url).post('/api/auth/accept-invitation', { token, password: 'another-long-password', name: 'Dr W. Tolliver' });
+    const accepted = await new ApiClient(frame.server.url).post('/api/auth/accept-invitation', { token, password: 'another-long-password', name: 'Dr W. Tolliver' });
     expect(accepted.status).toBe(200);
     expect(accepted.body).toMatchObject({ name: 'Dr W. Tolliver', role: 'supervisor' });
   });
 
   it('works only once', async () => {
     const { token } = await invite('viewer');
-    const first = await new ApiClient(server.url).post('/api/auth/accept-invitation', { token, password: 'first-password-x' });
+    const first = await new ApiClient(frame.server.url).post('/api/auth/accept-invitation', { token, password: 'first-password-x' });
     expect(first.status).toBe(200);
 
-    expect((await new ApiClient(server.url).get(`/api/auth/invitations/${token}`)).status).toBe(404);
-    const second = new ApiClient(server.url);
+    expect((await new ApiClient(frame.server.url).get(`/api/auth/invitations/${token}`)).status).toBe(404);
+    const second = new ApiClient(frame.server.url);
     const again = await second.post('/api/auth/accept-invitation', { token, password: 'second-password-y' });
     expect(again.status).toBe(404);
     expect(again.body.error.code).toBe('not_found');
     expect(second.sessionCookie).toBe('');
     // The first password still stands.
-    expect((await signedIn(server.url, first.body.email, 'first-password-x')).sessionCookie).not.toBe('');
+    expect((await signedIn(frame.server.url, first.body.email, 'first-password-x')).sessionCookie).not.toBe('');
   });
 
   it('lets exactly one of two simultaneous acceptances through', async () => {
     const { token } = await invite('chemist', 'race');
     const answers = await Promise.all(
       ['race-password-one', 'race-password-two'].map((password) =>
-        new ApiClient(server.url).post('/api/auth/accept-invitation', { token, password }),
+        new ApiClient(frame.server.url).post('/api/auth/accept-invitation', { token, password }),
       ),
     );
     expect(answers.map((a) => a.status).sort()).toEqual([200, 404]);
@@ -83,32 +76,32 @@ describe('invitation end to end', () => {
 
   it('refuses an expired link', async () => {
     const { email, token } = await invite('chemist', 'late');
-    await server.deps.pool.query("update invitations set expires_at = now() - interval '1 minute' where email = $1", [email]);
-    expect((await new ApiClient(server.url).get(`/api/auth/invitations/${token}`)).status).toBe(404);
-    const visitor = new ApiClient(server.url);
+    await frame.server.deps.pool.query("update invitations set expires_at = now() - interval '1 minute' where email = $1", [email]);
+    expect((await new ApiClient(frame.server.url).get(`/api/auth/invitations/${token}`)).status).toBe(404);
+    const visitor = new ApiClient(frame.server.url);
     const accepted = await visitor.post('/api/auth/accept-invitation', { token, password: 'too-late-password' });
     expect(accepted.status).toBe(404);
     expect(visitor.sessionCookie).toBe('');
-    const { rows } = await server.deps.pool.query('select 1 from users where email = $1', [email]);
+    const { rows } = await frame.server.deps.pool.query('select 1 from users where email = $1', [email]);
     expect(rows).toHaveLength(0);
   });
 
   it('refuses an unknown token', async () => {
     const madeUp = 'x'.repeat(43);
-    expect((await new ApiClient(server.url).get(`/api/auth/invitations/${madeUp}`)).status).toBe(404);
-    expect((await new ApiClient(server.url).post('/api/auth/accept-invitation', { token: madeUp, password: 'whatever-password' })).status).toBe(404);
+    expect((await new ApiClient(frame.server.url).get(`/api/auth/invitations/${madeUp}`)).status).toBe(404);
+    expect((await new ApiClient(frame.server.url).post('/api/auth/accept-invitation', { token: madeUp, password: 'whatever-password' })).status).toBe(404);
   });
 
   it('refuses a too-short password and leaves the link usable', async () => {
     const { token } = await invite('chemist', 'short');
-    const refused = await new ApiClient(server.url).post('/api/auth/accept-invitation', { token, password: 'short' });
+    const refused = await new ApiClient(frame.server.url).post('/api/auth/accept-invitation', { token, password: 'short' });
     expect(refused.status).toBe(400);
     expect(refused.body.error.fields).toHaveProperty('password');
-    expect((await new ApiClient(server.url).get(`/api/auth/invitations/${token}`)).status).toBe(200);
+    expect((await new ApiClient(frame.server.url).get(`/api/auth/invitations/${token}`)).status).toBe(200);
   });
 
   it('does not invite someone who already has an account', async () => {
-    const response = await admin.post('/api/invitations', { email: 'chemist@saltmarsh.test', name: 'Imke again', role: 'chemist' });
+    const response = await frame.admin.post('/api/invitations', { email: 'chemist@saltmarsh.test', name: 'Imke again', role: 'chemist' });
     expect(response.status).toBe(409);
     expect(response.body.error.code).toBe('account_exists');
   });

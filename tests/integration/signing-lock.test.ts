@@ -1,23 +1,15 @@
 import { count, eq } from 'drizzle-orm';
 import { $createParagraphNode, $createTextNode, $getRoot } from 'lexical';
-import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { describe, expect, it } from 'vitest';
 import { getCollabHub } from '../../server/collab';
 import { collabUpdates, pageSnapshots } from '../../server/db/schema';
 import { connectCollab, lexicalEditorOn, serverCaughtUp, type CollabClient } from '../support/collab';
-import { startServer, type TestServer } from '../support/server';
-import { countersignBody, newPage, signBody, signingGroup, writeOnPage, type SigningGroup } from '../support/signing';
+import { countersignBody, newPage, signBody, signingFrame, writeOnPage } from '../support/signing';
 
-let server: TestServer;
-let g: SigningGroup;
-
-beforeAll(async () => {
-  server = await startServer();
-  g = await signingGroup(server);
-});
-afterAll(() => server.close());
+const g = signingFrame();
 
 async function storedUpdates(pageId: string): Promise<number> {
-  const [row] = await server.deps.db.select({ n: count() }).from(collabUpdates).where(eq(collabUpdates.pageId, pageId));
+  const [row] = await g.server.deps.db.select({ n: count() }).from(collabUpdates).where(eq(collabUpdates.pageId, pageId));
   return Number(row.n);
 }
 
@@ -39,8 +31,8 @@ describe('a signed page is locked', () => {
 
   it('the websocket drops updates to a signed page, from a client connected before and one that joins after', async () => {
     const pageId = await newPage(g.author.api, g.notebookId, 'Locked against the websocket');
-    await writeOnPage(server, g.author.api, pageId, ['Signed text.']);
-    const before = await connectCollab(server.url, pageId, g.coEditor.api.sessionCookie);
+    await writeOnPage(g.server, g.author.api, pageId, ['Signed text.']);
+    const before = await connectCollab(g.server.url, pageId, g.coEditor.api.sessionCookie);
     try {
       const signed = await g.author.api.post(`/api/pages/${pageId}/sign`, signBody(g.author.person, g.supervisor.person.id));
       expect(signed.status).toBe(201);
@@ -48,7 +40,7 @@ describe('a signed page is locked', () => {
 
       type(before, 'Sneaked in by a co-editor after signing.');
       await serverCaughtUp(before);
-      const after = await connectCollab(server.url, pageId, g.author.api.sessionCookie);
+      const after = await connectCollab(g.server.url, pageId, g.author.api.sessionCookie);
       try {
         type(after, 'Sneaked in by the author after signing.');
         await serverCaughtUp(after);
@@ -57,7 +49,7 @@ describe('a signed page is locked', () => {
       }
 
       expect(await storedUpdates(pageId)).toBe(updatesAtSigning);
-      expect((await getCollabHub(server.deps).currentContent(pageId)).text).toBe('Signed text.');
+      expect((await getCollabHub(g.server.deps).currentContent(pageId)).text).toBe('Signed text.');
       const verify = await g.author.api.get(`/api/pages/${pageId}/verify`);
       expect(verify.body.intact).toBe(true);
     } finally {
@@ -67,19 +59,19 @@ describe('a signed page is locked', () => {
 
   it('takes a history snapshot at signing and at countersigning', async () => {
     const pageId = await newPage(g.author.api, g.notebookId, 'Snapshots at sign-off');
-    await writeOnPage(server, g.author.api, pageId, ['Text at sign-off.']);
+    await writeOnPage(g.server, g.author.api, pageId, ['Text at sign-off.']);
     await g.author.api.post(`/api/pages/${pageId}/sign`, signBody(g.author.person, g.supervisor.person.id));
     await g.supervisor.api.post(`/api/pages/${pageId}/countersign`, countersignBody(g.supervisor.person));
-    const reasons = await server.deps.db.select({ reason: pageSnapshots.reason }).from(pageSnapshots).where(eq(pageSnapshots.pageId, pageId));
+    const reasons = await g.server.deps.db.select({ reason: pageSnapshots.reason }).from(pageSnapshots).where(eq(pageSnapshots.pageId, pageId));
     expect(reasons.map((r) => r.reason)).toEqual(expect.arrayContaining(['signed', 'countersigned']));
   });
 
   it('a returned page accepts edits again over the websocket', async () => {
     const pageId = await newPage(g.author.api, g.notebookId, 'Unlocked by a return');
-    await writeOnPage(server, g.author.api, pageId, ['First version.']);
+    await writeOnPage(g.server, g.author.api, pageId, ['First version.']);
     await g.author.api.post(`/api/pages/${pageId}/sign`, signBody(g.author.person, g.supervisor.person.id));
     await g.supervisor.api.post(`/api/pages/${pageId}/return`, { comment: 'Add the work-up.' });
-    await writeOnPage(server, g.author.api, pageId, ['Work-up: washed with brine.']);
-    expect((await getCollabHub(server.deps).currentContent(pageId)).text).toContain('Work-up: washed with brine.');
+    await writeOnPage(g.server, g.author.api, pageId, ['Work-up: washed with brine.']);
+    expect((await getCollabHub(g.server.deps).currentContent(pageId)).text).toContain('Work-up: washed with brine.');
   });
 });

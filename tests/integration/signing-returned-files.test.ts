@@ -1,19 +1,11 @@
 import { createHash } from 'node:crypto';
 import { and, desc, eq, isNull } from 'drizzle-orm';
-import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { describe, expect, it } from 'vitest';
 import { attachments, auditEvents, signatures } from '../../server/db/schema';
-import { startServer, type TestServer } from '../support/server';
-import { newPage, signBody, signingGroup, writeOnPage, type SigningGroup } from '../support/signing';
+import { newPage, signBody, signingFrame, writeOnPage } from '../support/signing';
 import { uploadFiles } from '../support/uploads';
 
-let server: TestServer;
-let g: SigningGroup;
-
-beforeAll(async () => {
-  server = await startServer();
-  g = await signingGroup(server);
-});
-afterAll(() => server.close());
+const g = signingFrame();
 
 const sha256 = (bytes: Buffer) => createHash('sha256').update(bytes).digest('hex');
 
@@ -46,7 +38,7 @@ async function upload(pageId: string, name: string, content: Buffer): Promise<{ 
 
 /** What the newest author signature of the page itself hashed. */
 async function latestPageSignature(pageId: string) {
-  const [row] = await server.deps.db
+  const [row] = await g.server.deps.db
     .select()
     .from(signatures)
     .where(and(eq(signatures.pageId, pageId), isNull(signatures.addendumId), eq(signatures.role, 'author')))
@@ -62,7 +54,7 @@ async function latestPageSignature(pageId: string) {
 describe('files uploaded while a page was signed, after the page is returned', () => {
   it('belong to the page again and the next signature covers them; a changed checksum is then reported', async () => {
     const pageId = await newPage(g.author.api, g.notebookId, 'Returned with a late spectrum');
-    await writeOnPage(server, g.author.api, pageId, ['Isoamyl acetate, crude, 6.2 g.']);
+    await writeOnPage(g.server, g.author.api, pageId, ['Isoamyl acetate, crude, 6.2 g.']);
     await sign(pageId);
     const bytes = Buffer.from('##TITLE=isoamyl acetate IR (late)\n##END=\n');
     const late = await upload(pageId, 'late-ir.jdx', bytes);
@@ -71,7 +63,7 @@ describe('files uploaded while a page was signed, after the page is returned', (
     await returnPage(pageId);
     const listed = await g.author.api.get(`/api/pages/${pageId}/attachments`);
     expect(listed.body.find((a: { id: string }) => a.id === late.id)).toMatchObject({ addendum: false });
-    const [returned] = await server.deps.db
+    const [returned] = await g.server.deps.db
       .select({ details: auditEvents.details })
       .from(auditEvents)
       .where(and(eq(auditEvents.pageId, pageId), eq(auditEvents.type, 'page.returned')));
@@ -83,7 +75,7 @@ describe('files uploaded while a page was signed, after the page is returned', (
     expect(intact.intact).toBe(true);
     expect(intact.signatures.map((s) => s.withdrawn)).toEqual([true, false]);
 
-    await server.deps.db.update(attachments).set({ sha256: 'c'.repeat(64) }).where(eq(attachments.id, late.id));
+    await g.server.deps.db.update(attachments).set({ sha256: 'c'.repeat(64) }).where(eq(attachments.id, late.id));
     const tampered = await verify(pageId);
     expect(tampered.intact).toBe(false);
     expect(tampered.signatures[1].changes).toContain('File "late-ir.jdx" differs from what was signed');
@@ -93,7 +85,7 @@ describe('files uploaded while a page was signed, after the page is returned', (
 
   it('a file a signed addendum claims stays with that addendum; only the unclaimed one comes back to the page', async () => {
     const pageId = await newPage(g.author.api, g.notebookId, 'Returned after an addendum');
-    await writeOnPage(server, g.author.api, pageId, ['Distillation, fraction 2.']);
+    await writeOnPage(g.server, g.author.api, pageId, ['Distillation, fraction 2.']);
     await sign(pageId);
     const claimed = await upload(pageId, 'gc-trace.csv', Buffer.from('time (min),signal\n1,2\n2,3\n'));
     const addendum = await g.author.api.post(`/api/pages/${pageId}/addenda`, {
@@ -112,13 +104,13 @@ describe('files uploaded while a page was signed, after the page is returned', (
     expect(report.intact).toBe(true);
     const addendumCheck = report.signatures.find((s) => s.addendumId);
     expect(addendumCheck).toMatchObject({ withdrawn: false, intact: true });
-    const rows = await server.deps.db.select({ id: attachments.id, addendum: attachments.addendum }).from(attachments).where(eq(attachments.pageId, pageId));
+    const rows = await g.server.deps.db.select({ id: attachments.id, addendum: attachments.addendum }).from(attachments).where(eq(attachments.pageId, pageId));
     expect(Object.fromEntries(rows.map((r) => [r.id, r.addendum]))).toEqual({ [claimed.id]: true, [unclaimed.id]: false });
   });
 
   it('a file put back among the waiting addenda with SQL is reported as signed-but-gone and as covered by no signature', async () => {
     const pageId = await newPage(g.author.api, g.notebookId, 'Flag flipped after re-signing');
-    await writeOnPage(server, g.author.api, pageId, ['Ester wash with NaHCO3.']);
+    await writeOnPage(g.server, g.author.api, pageId, ['Ester wash with NaHCO3.']);
     await sign(pageId);
     const late = await upload(pageId, 'wash-ph.txt', Buffer.from('pH 8 after wash'));
     await returnPage(pageId);
@@ -126,7 +118,7 @@ describe('files uploaded while a page was signed, after the page is returned', (
     expect((await verify(pageId)).intact).toBe(true);
 
     // What a return made before files were handed back left behind: the file waits for an addendum.
-    await server.deps.db.update(attachments).set({ addendum: true }).where(eq(attachments.id, late.id));
+    await g.server.deps.db.update(attachments).set({ addendum: true }).where(eq(attachments.id, late.id));
     const report = await verify(pageId);
     expect(report.intact).toBe(false);
     expect(report.signatures[1].changes).toEqual([
@@ -137,11 +129,11 @@ describe('files uploaded while a page was signed, after the page is returned', (
 
   it('a draft that still has files waiting for an addendum (a return made before this rule) signs them with the page', async () => {
     const pageId = await newPage(g.author.api, g.notebookId, 'Returned before files came back');
-    await writeOnPage(server, g.author.api, pageId, ['Dry over MgSO4.']);
+    await writeOnPage(g.server, g.author.api, pageId, ['Dry over MgSO4.']);
     await sign(pageId);
     const late = await upload(pageId, 'kf-water.txt', Buffer.from('water 0.04 %'));
     await returnPage(pageId);
-    await server.deps.db.update(attachments).set({ addendum: true }).where(eq(attachments.id, late.id));
+    await g.server.deps.db.update(attachments).set({ addendum: true }).where(eq(attachments.id, late.id));
 
     await sign(pageId);
     expect((await latestPageSignature(pageId)).attachments.map((a) => a.id)).toEqual([late.id]);

@@ -1,22 +1,14 @@
 import { randomUUID } from 'node:crypto';
 import { eq } from 'drizzle-orm';
-import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { describe, expect, it } from 'vitest';
 import { attachments, pageContent, signatures } from '../../server/db/schema';
-import { startServer, type TestServer } from '../support/server';
-import { countersignBody, newPage, signBody, signingGroup, writeOnPage, type SigningGroup } from '../support/signing';
+import { countersignBody, newPage, signBody, signingFrame, writeOnPage } from '../support/signing';
 
-let server: TestServer;
-let g: SigningGroup;
-
-beforeAll(async () => {
-  server = await startServer();
-  g = await signingGroup(server);
-});
-afterAll(() => server.close());
+const g = signingFrame();
 
 async function witnessedPage(title: string): Promise<string> {
   const pageId = await newPage(g.author.api, g.notebookId, title);
-  await writeOnPage(server, g.author.api, pageId, ['Charge 10.0 g isoamyl alcohol.', 'Add 1.2 equivalents acetic acid.']);
+  await writeOnPage(g.server, g.author.api, pageId, ['Charge 10.0 g isoamyl alcohol.', 'Add 1.2 equivalents acetic acid.']);
   expect((await g.author.api.post(`/api/pages/${pageId}/sign`, signBody(g.author.person, g.supervisor.person.id))).status).toBe(201);
   expect((await g.supervisor.api.post(`/api/pages/${pageId}/countersign`, countersignBody(g.supervisor.person))).status).toBe(201);
   return pageId;
@@ -35,7 +27,7 @@ describe('tamper detection', () => {
   it('a changed page text (page_content row) is reported with where it changed', async () => {
     const pageId = await witnessedPage('Tampered text');
     expect((await verify(pageId)).intact).toBe(true);
-    await server.deps.db
+    await g.server.deps.db
       .update(pageContent)
       .set({ text: 'Charge 10.0 g isoamyl alcohol.\n\nAdd 2.0 equivalents acetic acid.' })
       .where(eq(pageContent.pageId, pageId));
@@ -49,7 +41,7 @@ describe('tamper detection', () => {
 
   it('a structure slipped into the stored content is named', async () => {
     const pageId = await witnessedPage('Tampered structures');
-    await server.deps.db
+    await g.server.deps.db
       .update(pageContent)
       .set({ structures: [{ key: 'compound 9', molfile: '', smiles: 'CC(=O)OCCC(C)C' }] })
       .where(eq(pageContent.pageId, pageId));
@@ -60,7 +52,7 @@ describe('tamper detection', () => {
 
   it('a file row added to the signed page is reported', async () => {
     const pageId = await witnessedPage('Tampered files');
-    await server.deps.db.insert(attachments).values({
+    await g.server.deps.db.insert(attachments).values({
       id: randomUUID(),
       pageId,
       uploaderId: g.author.person.id,
@@ -79,10 +71,10 @@ describe('tamper detection', () => {
 
   it('an edited signature row (name or hash) no longer agrees with the audit trail', async () => {
     const pageId = await witnessedPage('Tampered signature');
-    const [witness] = await server.deps.db.select().from(signatures).where(eq(signatures.pageId, pageId)).orderBy(signatures.signedAt).offset(1);
-    await server.deps.db.update(signatures).set({ signerName: 'Someone Else' }).where(eq(signatures.id, witness.id));
-    const [author] = await server.deps.db.select().from(signatures).where(eq(signatures.pageId, pageId)).orderBy(signatures.signedAt).limit(1);
-    await server.deps.db.update(signatures).set({ contentHash: 'b'.repeat(64) }).where(eq(signatures.id, author.id));
+    const [witness] = await g.server.deps.db.select().from(signatures).where(eq(signatures.pageId, pageId)).orderBy(signatures.signedAt).offset(1);
+    await g.server.deps.db.update(signatures).set({ signerName: 'Someone Else' }).where(eq(signatures.id, witness.id));
+    const [author] = await g.server.deps.db.select().from(signatures).where(eq(signatures.pageId, pageId)).orderBy(signatures.signedAt).limit(1);
+    await g.server.deps.db.update(signatures).set({ contentHash: 'b'.repeat(64) }).where(eq(signatures.id, author.id));
     const report = await verify(pageId);
     expect(report.intact).toBe(false);
     const [a, w] = report.signatures;
@@ -93,9 +85,9 @@ describe('tamper detection', () => {
 
   it('a countersignature is refused when the content no longer matches what the author signed', async () => {
     const pageId = await newPage(g.author.api, g.notebookId, 'Changed before countersigning');
-    await writeOnPage(server, g.author.api, pageId, ['Original line.']);
+    await writeOnPage(g.server, g.author.api, pageId, ['Original line.']);
     await g.author.api.post(`/api/pages/${pageId}/sign`, signBody(g.author.person, g.supervisor.person.id));
-    await server.deps.db.update(pageContent).set({ text: 'Rewritten line.' }).where(eq(pageContent.pageId, pageId));
+    await g.server.deps.db.update(pageContent).set({ text: 'Rewritten line.' }).where(eq(pageContent.pageId, pageId));
     const response = await g.supervisor.api.post(`/api/pages/${pageId}/countersign`, countersignBody(g.supervisor.person));
     expect(response.status).toBe(409);
     expect(response.body.error.code).toBe('record_changed');

@@ -1,24 +1,16 @@
 import { and, eq } from 'drizzle-orm';
-import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { describe, expect, it } from 'vitest';
 import { auditEvents, notebooks, pages } from '../../server/db/schema';
 import { signedIn } from '../support/api';
-import { startServer, type TestServer } from '../support/server';
-import { countersignBody, mailTo, newPage, signBody, signingGroup, writeOnPage, type SigningGroup } from '../support/signing';
+import { countersignBody, mailTo, newPage, signBody, signingFrame, writeOnPage } from '../support/signing';
 
-let server: TestServer;
-let g: SigningGroup;
-
-beforeAll(async () => {
-  server = await startServer();
-  g = await signingGroup(server);
-});
-afterAll(() => server.close());
+const g = signingFrame();
 
 const ISO_UTC = /^\d{4}-\d{2}-\d{2}T\d{2}:\d{2}:\d{2}\.\d{3}Z$/;
 
 async function signedPage(title: string, text = ['Aim: isoamyl acetate by Fischer esterification.']) {
   const pageId = await newPage(g.author.api, g.notebookId, title);
-  await writeOnPage(server, g.author.api, pageId, text);
+  await writeOnPage(g.server, g.author.api, pageId, text);
   const signed = await g.author.api.post(`/api/pages/${pageId}/sign`, signBody(g.author.person, g.supervisor.person.id));
   expect(signed.status).toBe(201);
   return pageId;
@@ -27,7 +19,7 @@ async function signedPage(title: string, text = ['Aim: isoamyl acetate by Fische
 describe('sign → countersign, end to end through the API and the mail catcher', () => {
   it('records both signatures with name, UTC time, meaning and hash, locks the page and mails both people', async () => {
     const pageId = await newPage(g.author.api, g.notebookId, 'Isoamyl acetate, batch 2');
-    await writeOnPage(server, g.author.api, pageId, ['Aim: isoamyl acetate.', 'Reflux 90 min with Dean–Stark trap.']);
+    await writeOnPage(g.server, g.author.api, pageId, ['Aim: isoamyl acetate.', 'Reflux 90 min with Dean–Stark trap.']);
 
     const signed = await g.author.api.post(`/api/pages/${pageId}/sign`, signBody(g.author.person, g.supervisor.person.id));
     expect(signed.status).toBe(201);
@@ -93,7 +85,7 @@ describe('sign → countersign, end to end through the API and the mail catcher'
 
     const renamed = await g.author.api.patch(`/api/pages/${pageId}`, { title: 'To be returned (yield added)' });
     expect(renamed.status).toBe(200);
-    await writeOnPage(server, g.author.api, pageId, ['Yield 4.1 g.']);
+    await writeOnPage(g.server, g.author.api, pageId, ['Yield 4.1 g.']);
     const again = await g.author.api.post(`/api/pages/${pageId}/sign`, signBody(g.author.person, g.supervisor2.person.id));
     expect(again.status).toBe(201);
     const verify = await g.author.api.get(`/api/pages/${pageId}/verify`);
@@ -145,7 +137,7 @@ describe('password re-entry (21 CFR 11.200(a)(1)) and attempts recorded (11.300(
     expect(response.body.error.code).toBe('signature_rejected');
     const record = await g.author.api.get(`/api/pages/${pageId}/record`);
     expect(record.body).toMatchObject({ status: 'draft', locked: false, signatures: [] });
-    const events = await server.deps.db
+    const events = await g.server.deps.db
       .select()
       .from(auditEvents)
       .where(and(eq(auditEvents.pageId, pageId), eq(auditEvents.type, 'signature.failed')));
@@ -163,7 +155,7 @@ describe('password re-entry (21 CFR 11.200(a)(1)) and attempts recorded (11.300(
     });
     expect(response.status).toBe(403);
     expect(response.body.error.code).toBe('not_your_identity');
-    const events = await server.deps.db.select().from(auditEvents).where(and(eq(auditEvents.pageId, pageId), eq(auditEvents.type, 'signature.failed')));
+    const events = await g.server.deps.db.select().from(auditEvents).where(and(eq(auditEvents.pageId, pageId), eq(auditEvents.type, 'signature.failed')));
     expect(events[0].details).toMatchObject({ reason: 'identity_mismatch' });
   });
 
@@ -182,9 +174,9 @@ describe('role refusals', () => {
     expect(byReader.status).toBe(403);
     const byCoEditor = await g.coEditor.api.post(`/api/pages/${pageId}/sign`, signBody(g.coEditor.person, g.supervisor.person.id));
     expect(byCoEditor.status).toBe(403);
-    const anonymous = await fetch(`${server.url}/api/pages/${pageId}/sign`, {
+    const anonymous = await fetch(`${g.server.url}/api/pages/${pageId}/sign`, {
       method: 'POST',
-      headers: { origin: server.url, 'content-type': 'application/json' },
+      headers: { origin: g.server.url, 'content-type': 'application/json' },
       body: JSON.stringify(signBody(g.author.person, g.supervisor.person.id)),
     });
     expect(anonymous.status).toBe(401);
@@ -223,7 +215,7 @@ describe('role refusals', () => {
 
   it('a supervisor cannot countersign their own page', async () => {
     const pageId = await newPage(g.supervisor.api, g.notebookId, 'The supervisor’s own page');
-    await writeOnPage(server, g.supervisor.api, pageId, ['Reference sample prepared by the supervisor.']);
+    await writeOnPage(g.server, g.supervisor.api, pageId, ['Reference sample prepared by the supervisor.']);
     const signed = await g.supervisor.api.post(`/api/pages/${pageId}/sign`, signBody(g.supervisor.person, g.supervisor.person.id));
     // Naming oneself as countersigner is refused outright.
     expect(signed.status).toBe(422);
@@ -253,7 +245,7 @@ describe('printable record', () => {
     expect(print.body.signatures[0]).toMatchObject({ signer: { name: 'Test author' }, meaning: 'I performed and recorded this work' });
     expect(print.body.verification.intact).toBe(true);
 
-    const pdf = await fetch(`${server.url}/api/pages/${pageId}/record.pdf`, { headers: { cookie: g.reader.api.sessionCookie } });
+    const pdf = await fetch(`${g.server.url}/api/pages/${pageId}/record.pdf`, { headers: { cookie: g.reader.api.sessionCookie } });
     expect(pdf.status).toBe(200);
     expect(pdf.headers.get('content-type')).toBe('application/pdf');
     expect(pdf.headers.get('content-disposition')).toMatch(/^attachment; filename="?notebook-page-\d{3}-record\.pdf"?$/);
@@ -264,9 +256,9 @@ describe('printable record', () => {
 
 describe('demo scenario', () => {
   it('has a countersigned page and a page waiting for the demo supervisor, both verifying intact', async () => {
-    const supervisor = await signedIn(server.url, 'supervisor@saltmarsh.test');
+    const supervisor = await signedIn(g.server.url, 'supervisor@saltmarsh.test');
     const demoPage = async (notebook: string) => {
-      const [row] = await server.deps.db
+      const [row] = await g.server.deps.db
         .select({ id: pages.id })
         .from(pages)
         .innerJoin(notebooks, eq(notebooks.id, pages.notebookId))

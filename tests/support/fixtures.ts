@@ -1,10 +1,12 @@
 import { randomUUID } from 'node:crypto';
+import { afterAll, beforeAll } from 'vitest';
 import type { AppDeps } from '../../server/context';
 import { hashPassword } from '../../server/auth/passwords';
 import { newToken } from '../../server/auth/tokens';
 import { users } from '../../server/db/schema';
 import type { Role } from '../../shared/schemas/common';
 import { ApiClient, signedIn } from './api';
+import { startServer, type TestServer } from './server';
 
 /**
  * Test data of one's own: the suite shares one database, so every test makes the people,
@@ -36,6 +38,17 @@ export async function signedInAs(url: string, person: TestPerson): Promise<ApiCl
   return signedIn(url, person.email, person.password);
 }
 
+/** A new page of `title` in the demo esters notebook, made through the API by its owner chemist@ (see server/seed/demo.ts). */
+export async function newDemoNotebookPage(url: string, title: string): Promise<string> {
+  const chemist = await signedIn(url, 'chemist@saltmarsh.test');
+  const notebooks = await chemist.get<{ id: string; title: string }[]>('/api/notebooks');
+  const notebook = notebooks.body.find((n) => n.title === 'Fruity esters from short-chain acids');
+  if (!notebook) throw new Error('demo notebook missing');
+  const created = await chemist.post<{ id: string }>(`/api/notebooks/${notebook.id}/pages`, { title });
+  if (created.status !== 201) throw new Error(`page: ${created.status} ${JSON.stringify(created.body)}`);
+  return created.body.id;
+}
+
 /** A live invitation written straight into the database; returns the token its link would carry. */
 export async function insertInvitation(deps: AppDeps, name = 'Test Invitee'): Promise<string> {
   const { token, tokenHash } = newToken();
@@ -51,6 +64,23 @@ export async function insertPasswordReset(deps: AppDeps, userId: string): Promis
   const { token, tokenHash } = newToken();
   await deps.pool.query("insert into password_resets (user_id, token_hash, expires_at) values ($1, $2, now() + interval '1 hour')", [userId, tokenHash]);
   return token;
+}
+
+export interface AdminFrame {
+  server: TestServer;
+  /** admin@, who sends invitations and reads the caught mail. */
+  admin: ApiClient;
+}
+
+/** A server of this file's own with admin@ signed in on it, registered as the file's hooks. */
+export function adminFrame(): AdminFrame {
+  const frame = {} as AdminFrame;
+  beforeAll(async () => {
+    frame.server = await startServer();
+    frame.admin = await signedIn(frame.server.url, 'admin@saltmarsh.test');
+  });
+  afterAll(() => frame.server?.close());
+  return frame;
 }
 
 /** The newest caught message to `address`, read through the admins' mail view. */

@@ -1,8 +1,9 @@
+import { afterAll, beforeAll } from 'vitest';
 import type { ApiClient } from './api';
 import { signedIn } from './api';
 import { connectCollab, lexicalEditorOn, serverCaughtUp, writeBlocks } from './collab';
 import { createPerson, latestMailTo, signedInAs, type TestPerson } from './fixtures';
-import type { TestServer } from './server';
+import { startServer, type TestServer } from './server';
 
 export interface Member {
   person: TestPerson;
@@ -50,6 +51,25 @@ export async function signingGroup(server: TestServer): Promise<SigningGroup> {
     if (added.status >= 300) throw new Error(`member: ${added.status} ${JSON.stringify(added.body)}`);
   }
   return { notebookId, author, coEditor, supervisor, supervisor2, reader, outsider, admin: await signedIn(server.url, 'admin@saltmarsh.test') };
+}
+
+/** A signing group together with the server it lives on. */
+export interface SigningFrame extends SigningGroup {
+  server: TestServer;
+}
+
+/**
+ * The signing tests' common frame, registered as this file's hooks: a server of the file's own
+ * with a fresh signing group on it, closed after the file's tests.
+ */
+export function signingFrame(): SigningFrame {
+  const frame = {} as SigningFrame;
+  beforeAll(async () => {
+    frame.server = await startServer();
+    Object.assign(frame, await signingGroup(frame.server));
+  });
+  afterAll(() => frame.server?.close());
+  return frame;
 }
 
 export async function newPage(api: ApiClient, notebookId: string, title: string): Promise<string> {
