@@ -62,9 +62,15 @@ export interface Connection extends ConnectionGrant {
   closed: boolean;
 }
 
-/** What the server itself announces in awareness; clients read it to switch to read-only. */
+/**
+ * What the server itself announces in awareness; clients read it to switch to read-only: the
+ * page's lock, and who is connected without write access (readers, organisation viewers), so
+ * someone demoted while the page is open learns it at once instead of typing into nothing.
+ */
 export interface ServerAwarenessState {
   page: { locked: boolean };
+  /** User ids, sorted, of the people whose open connections are read-only. */
+  readOnlyUsers: string[];
 }
 
 /** Close codes of our own (4000–4999 is the application range). */
@@ -133,7 +139,7 @@ export class Room {
       this.relay(update, origin);
     });
     this.awareness.on('update', (changes: AwarenessChanges) => this.relayAwareness(changes));
-    this.announceLock();
+    this.announce();
     this.tickTimer = setInterval(() => this.tick(), timings.tickMs);
     this.tickTimer.unref();
   }
@@ -213,6 +219,7 @@ export class Room {
     this.send(conn, syncStep1Message(this.doc));
     const present = [...this.awareness.getStates().keys()];
     if (present.length > 0) this.send(conn, awarenessMessage(this.awareness, present));
+    this.announce();
     return conn;
   }
 
@@ -227,9 +234,8 @@ export class Room {
 
   /** From now on updates are dropped (locked) or accepted again; connected clients are told. */
   async setLocked(locked: boolean): Promise<void> {
-    const changed = this.locked !== locked;
     this.locked = locked;
-    if (changed) this.announceLock();
+    this.announce();
     // Updates accepted before the lock are still stored; a sign-off closes the editing sessions.
     await this.flush();
     if (locked) await this.run(() => this.endSessions());
@@ -385,6 +391,7 @@ export class Room {
       }
       conn.canWrite = verdict.canWrite;
       if (!conn.canWrite) this.dropQueued(conn);
+      this.announce();
       return;
     }
     if (!verdict) this.disconnect(conn, CLOSE_CHECK_FAILED, 'could not check access; reconnect');
@@ -410,6 +417,7 @@ export class Room {
     conn.held = [];
     this.dropQueued(conn);
     conn.ws.close(code, reason);
+    this.announce();
   }
 
   /**
@@ -454,8 +462,12 @@ export class Room {
     for (const other of this.conns.values()) this.send(other, message);
   }
 
-  private announceLock(): void {
-    const state: ServerAwarenessState = { page: { locked: this.locked } };
+  /** Sets the server's entry when the lock or anyone's write access changed (else nothing is sent). */
+  private announce(): void {
+    const readOnly = new Set<string>();
+    for (const conn of this.conns.values()) if (!conn.closed && !conn.canWrite) readOnly.add(conn.user.id);
+    const state: ServerAwarenessState = { page: { locked: this.locked }, readOnlyUsers: [...readOnly].sort() };
+    if (JSON.stringify(state) === JSON.stringify(this.awareness.getLocalState())) return;
     this.awareness.setLocalState(state);
   }
 
@@ -471,6 +483,7 @@ export class Room {
     conn.closed = true;
     for (const id of conn.awarenessIds) this.awarenessOwners.delete(id);
     awarenessProtocol.removeAwarenessStates(this.awareness, [...conn.awarenessIds], null);
+    this.announce();
     this.scheduleUnload();
   }
 

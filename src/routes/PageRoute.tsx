@@ -59,7 +59,14 @@ export function PageRoute() {
       <div className="mt-6 flex-1">
         <PageBodySlot>
           {me.data && (
-            <PageEditor key={data.id} pageId={data.id} canEdit={data.access.canEdit && !data.locked} me={{ id: me.data.id, name: me.data.name }} embedRenderers={embedRenderers} />
+            <PageEditor
+              key={data.id}
+              pageId={data.id}
+              canEdit={data.access.canEdit && !data.locked}
+              me={{ id: me.data.id, name: me.data.name }}
+              embedRenderers={embedRenderers}
+              onAccessChanged={() => queryClient.invalidateQueries({ queryKey: pageKeys.one(data.id) })}
+            />
           )}
         </PageBodySlot>
       </div>

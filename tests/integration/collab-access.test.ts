@@ -72,6 +72,14 @@ function edit(client: CollabClient, text: string): void {
   client.root.insert(client.root.length, text);
 }
 
+/** The read-only list in the server's own awareness entry (the one with `page`), as a client sees it. */
+function readOnlyAt(client: CollabClient): string[] | undefined {
+  for (const state of client.provider.awareness.getStates().values()) if (state.page) return state.readOnlyUsers as string[];
+  return undefined;
+}
+
+const sameList = (client: CollabClient, expected: string[]) => () => JSON.stringify(readOnlyAt(client)) === JSON.stringify(expected);
+
 describe('membership and role changes reach open connections', () => {
   it('closes the connection of an editor removed from the notebook (4403); their later edits are neither stored nor relayed', async () => {
     const { owner, editor, notebookId, pageId } = await editingPair();
@@ -150,6 +158,36 @@ describe('membership and role changes reach open connections', () => {
     await waitFor(() => editorClient.root.toString().includes('owner text'), 'the owner’s edit at the viewer');
     expect(ownerClient.root.toString()).toBe('owner text');
     expect(await updatesBy(server, pageId, editor.person.id, demotedAt)).toBe(0);
+  });
+
+  it('announces who is read-only in the server’s awareness entry, so an open editor learns of a demotion at once', async () => {
+    const { owner, editor, notebookId, pageId } = await editingPair();
+    const ownerClient = await join(server, owner.api, pageId);
+    const editorClient = await join(server, editor.api, pageId);
+    await waitFor(sameList(editorClient, []), 'an empty read-only list at the editor');
+
+    expect((await owner.api.put(`/api/notebooks/${notebookId}/members`, { userId: editor.person.id, role: 'reader' })).status).toBe(200);
+    // The route answers after the hub decided, so the announcement is on its way by now.
+    await waitFor(sameList(editorClient, [editor.person.id]), 'the demoted editor listed at their own client');
+    await waitFor(sameList(ownerClient, [editor.person.id]), 'the demoted editor listed at the owner');
+
+    expect((await owner.api.put(`/api/notebooks/${notebookId}/members`, { userId: editor.person.id, role: 'editor' })).status).toBe(200);
+    await waitFor(sameList(editorClient, []), 'the promoted editor no longer listed');
+
+    expect((await admin.patch(`/api/users/${editor.person.id}`, { role: 'viewer' })).status).toBe(200);
+    await waitFor(sameList(editorClient, [editor.person.id]), 'the organisation viewer listed');
+    // Someone who leaves is no longer listed.
+    open.splice(open.indexOf(editorClient), 1);
+    editorClient.destroy();
+    await waitFor(sameList(ownerClient, []), 'the viewer gone from the list after leaving');
+  });
+
+  it('lists a reader from the moment they join', async () => {
+    const { owner, editor, notebookId, pageId } = await editingPair();
+    expect((await owner.api.put(`/api/notebooks/${notebookId}/members`, { userId: editor.person.id, role: 'reader' })).status).toBe(200);
+    const ownerClient = await join(server, owner.api, pageId);
+    await join(server, editor.api, pageId);
+    await waitFor(sameList(ownerClient, [editor.person.id]), 'the reader listed');
   });
 
   it('leaves other people’s connections alone', async () => {

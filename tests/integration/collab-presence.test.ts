@@ -146,9 +146,10 @@ describe('presence cannot be spoofed', () => {
     sendRaw(intruder, awarenessMessage(serverId!, clockAt(observer, serverId!) + 10, { page: { locked: false } }));
     sendRaw(intruder, awarenessMessage(serverId!, clockAt(observer, serverId!) + 20, null));
     await settled(intruder, observer);
-    expect(stateAt(observer, serverId!)).toEqual({ page: { locked: true } });
+    // Everyone on the page writes (chemist@, chemist2@, supervisor@), so nobody is listed read-only.
+    expect(stateAt(observer, serverId!)).toEqual({ page: { locked: true }, readOnlyUsers: [] });
     const later = await join(frame.chemist, pageId);
-    expect(stateAt(later, serverId!)).toEqual({ page: { locked: true } });
+    expect(stateAt(later, serverId!)).toEqual({ page: { locked: true }, readOnlyUsers: [] });
   });
 
   it('lets the same person’s new connection take over their entry (a reconnect the old socket has not noticed)', async () => {

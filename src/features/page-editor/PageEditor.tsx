@@ -21,6 +21,7 @@ import { asLexicalProvider, createPageProvider } from './collab/createProvider';
 import { presenceColour } from './collab/palette';
 import { PresenceList } from './collab/PresenceList';
 import { useCollabStatus } from './collab/useCollabStatus';
+import { useWriteAccessChange } from './collab/useWriteAccessChange';
 import { EditorEnvironmentContext, type EditorEnvironment, type StructureDialogRequest } from './EditorEnvironment';
 import { HistoryPanel } from './history/HistoryPanel';
 import { SnapshotViewer } from './history/SnapshotViewer';
@@ -44,6 +45,11 @@ export interface PageEditorProps {
   canEdit: boolean;
   me: EditorUser;
   embedRenderers?: EmbedRenderers;
+  /**
+   * The server changed my write access while the page was open (demoted to reader, organisation
+   * viewer, or promoted back): the page's details, `canEdit` among them, are out of date.
+   */
+  onAccessChanged?: () => void;
 }
 
 function StructureDialogHost({ request, onClose }: { request: StructureDialogRequest; onClose: () => void }) {
@@ -69,21 +75,34 @@ function ReadOnlyNote({ locked }: { locked: boolean }) {
   );
 }
 
+function DemotedNotice({ onDismiss }: { onDismiss: () => void }) {
+  return (
+    <div role="status" data-testid="demoted-notice" className="mb-3 flex items-start justify-between gap-3 rounded-md border border-fold-strong bg-paper-deep px-3 py-2 text-sm text-ink">
+      Your role changed while this page was open: you can still read it, but you can no longer edit it.
+      <button type="button" className="text-xs font-medium hover:underline" onClick={onDismiss}>
+        Dismiss
+      </button>
+    </div>
+  );
+}
+
 const noRenderers: EmbedRenderers = {};
 
 /**
  * The page body: rich text shared live through the page's Yjs document at `/collab/<pageId>`,
  * with structure blocks, presence, connection state, the page's structure list and its history.
  */
-export function PageEditor({ pageId, canEdit, me, embedRenderers = noRenderers }: PageEditorProps) {
+export function PageEditor({ pageId, canEdit, me, embedRenderers = noRenderers, onAccessChanged }: PageEditorProps) {
   const [provider, setProvider] = useState<WebsocketProvider | null>(null);
   const providerFactory = useCallback((id: string, docs: Map<string, Y.Doc>): Provider => {
     const created = createPageProvider(id, docs);
     setProvider(created);
     return asLexicalProvider(created);
   }, []);
-  const status = useCollabStatus(provider);
-  const editable = canEdit && !status.locked;
+  const status = useCollabStatus(provider, me.id);
+  const accessChange = useWriteAccessChange(status.readOnly, onAccessChanged);
+  // The server's word comes at once; `canEdit` follows when the page's details are fetched again.
+  const editable = canEdit && !status.locked && status.readOnly !== true;
 
   const [structures, setStructures] = useState<StructureFields[]>([]);
   const [dialog, setDialog] = useState<StructureDialogRequest | null>(null);
@@ -143,6 +162,7 @@ export function PageEditor({ pageId, canEdit, me, embedRenderers = noRenderers }
                   trailing={null}
                 />
               )}
+              {accessChange.demoted && <DemotedNotice onDismiss={accessChange.dismiss} />}
               {notice && (
                 <div role="alert" className="mb-3 flex items-start justify-between gap-3 rounded-md border border-ember-100 bg-ember-50 px-3 py-2 text-sm text-ember-700">
                   {notice}

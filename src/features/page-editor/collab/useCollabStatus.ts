@@ -13,15 +13,25 @@ interface AwarenessEntry {
   name?: unknown;
   color?: unknown;
   awarenessData?: { userId?: unknown };
-  /** Announced by the server itself (see server/collab/room.ts). */
+  /** Announced by the server itself (ServerAwarenessState in server/collab/room.ts). */
   page?: { locked?: unknown };
+  readOnlyUsers?: unknown;
 }
 
-/** Connection phase, who is on the page, and whether the server has locked it. */
-export function useCollabStatus(provider: WebsocketProvider | null): { phase: ConnectionPhase; people: PresentPerson[]; locked: boolean } {
+export interface CollabStatus {
+  phase: ConnectionPhase;
+  people: PresentPerson[];
+  locked: boolean;
+  /** Whether the server holds `userId`'s connection read-only; null until the server has said. */
+  readOnly: boolean | null;
+}
+
+/** Connection phase, who is on the page, whether the server has locked it and may take my edits. */
+export function useCollabStatus(provider: WebsocketProvider | null, userId: string): CollabStatus {
   const [connection, dispatch] = useReducer(connectionReducer, initialConnection);
   const [people, setPeople] = useState<PresentPerson[]>([]);
   const [locked, setLocked] = useState(false);
+  const [readOnly, setReadOnly] = useState<boolean | null>(null);
 
   useEffect(() => {
     if (!provider) return;
@@ -32,16 +42,21 @@ export function useCollabStatus(provider: WebsocketProvider | null): { phase: Co
     const onAwareness = () => {
       const seen = new Map<string, PresentPerson>();
       let serverLock = false;
+      let serverReadOnly: boolean | null = null;
       for (const [clientId, raw] of provider.awareness.getStates()) {
         const state = raw as AwarenessEntry;
-        if (state.page && state.page.locked === true) serverLock = true;
-        const userId = state.awarenessData?.userId;
-        if (typeof userId !== 'string' || typeof state.name !== 'string') continue;
+        if (state.page) {
+          if (state.page.locked === true) serverLock = true;
+          if (Array.isArray(state.readOnlyUsers)) serverReadOnly = state.readOnlyUsers.includes(userId);
+        }
+        const personId = state.awarenessData?.userId;
+        if (typeof personId !== 'string' || typeof state.name !== 'string') continue;
         const self = clientId === provider.awareness.clientID;
-        if (!seen.has(userId) || self) seen.set(userId, { userId, name: state.name, colour: String(state.color), self });
+        if (!seen.has(personId) || self) seen.set(personId, { userId: personId, name: state.name, colour: String(state.color), self });
       }
       setPeople([...seen.values()].sort((a, b) => Number(b.self) - Number(a.self) || a.name.localeCompare(b.name)));
       setLocked(serverLock);
+      setReadOnly(serverReadOnly);
     };
     provider.on('status', onStatus);
     provider.on('sync', onSync);
@@ -56,7 +71,7 @@ export function useCollabStatus(provider: WebsocketProvider | null): { phase: Co
       provider.doc.off('update', onUpdate);
       provider.awareness.off('change', onAwareness);
     };
-  }, [provider]);
+  }, [provider, userId]);
 
-  return { phase: connectionPhase(connection), people, locked };
+  return { phase: connectionPhase(connection), people, locked, readOnly };
 }
