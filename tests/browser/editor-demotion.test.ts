@@ -1,32 +1,19 @@
-import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import type { Browser, BrowserContext, Page } from 'playwright-core';
-import { DEMO_PASSWORD, signedIn, type ApiClient } from '../support/api';
-import { launchBrowser, signIn } from '../support/browser';
+import { beforeAll, describe, expect, it } from 'vitest';
+import type { Page } from 'playwright-core';
+import { signedIn, type ApiClient } from '../support/api';
+import { browserFrame } from '../support/browser';
 import { getCollabHub } from '../../server/collab';
-import { startServer, type TestServer } from '../support/server';
 
 // Someone demoted to reader while they have the page open: the server stops taking their edits
 // and says so in its awareness entry, and their editor turns read-only with a notice instead of
 // letting them type into nothing. In real headless Chromium against the real server; build the
 // client first (`npx vite build`). chemist@ owns a notebook of this test's own, chemist2@ edits in it.
 
-let server: TestServer;
-let browser: Browser;
+const frame = browserFrame();
 let owner: ApiClient;
 let notebookId: string;
 let pageId: string;
 let editorId: string;
-const contexts: BrowserContext[] = [];
-
-async function openPage(email: string): Promise<Page> {
-  const context = await browser.newContext({ viewport: { width: 1400, height: 1000 } });
-  contexts.push(context);
-  const page = await context.newPage();
-  await signIn(page, server.url, email, DEMO_PASSWORD);
-  await page.goto(`${server.url}/pages/${pageId}`);
-  await page.locator('[data-testid="connection-state"][data-phase="live"]').waitFor({ timeout: 20_000 });
-  return page;
-}
 
 const pageText = (page: Page) => page.getByTestId('page-text');
 const editable = (page: Page) => pageText(page).getAttribute('contenteditable');
@@ -46,8 +33,7 @@ let ownerPage: Page;
 let editorPage: Page;
 
 beforeAll(async () => {
-  server = await startServer();
-  browser = await launchBrowser();
+  const { server } = frame;
   owner = await signedIn(server.url, 'chemist@saltmarsh.test');
   const me2 = await (await signedIn(server.url, 'chemist2@saltmarsh.test')).get<{ id: string }>('/api/me');
   editorId = me2.body.id;
@@ -58,13 +44,7 @@ beforeAll(async () => {
   const page = await owner.post<{ id: string }>(`/api/notebooks/${notebookId}/pages`, { title: 'Ethyl butanoate, second run' });
   expect(page.status).toBe(201);
   pageId = page.body.id;
-  [ownerPage, editorPage] = await Promise.all([openPage('chemist@saltmarsh.test'), openPage('chemist2@saltmarsh.test')]);
-});
-
-afterAll(async () => {
-  for (const context of contexts) await context.close();
-  await browser?.close();
-  await server?.close();
+  [ownerPage, editorPage] = await Promise.all([frame.openPage(pageId, 'chemist@saltmarsh.test'), frame.openPage(pageId, 'chemist2@saltmarsh.test')]);
 });
 
 describe('a demotion while the page is open', () => {
@@ -89,7 +69,7 @@ describe('a demotion while the page is open', () => {
     await expect.poll(() => pageText(editorPage).textContent(), { timeout: 15_000 }).toContain('Owner: heated to reflux.');
     await expect(pageText(ownerPage).textContent()).resolves.not.toContain('Typed after the demotion.');
     await expect(pageText(editorPage).textContent()).resolves.not.toContain('Typed after the demotion.');
-    const stored = await getCollabHub(server.deps).currentContent(pageId);
+    const stored = await getCollabHub(frame.server.deps).currentContent(pageId);
     expect(stored.text).toContain('Owner: heated to reflux.');
     expect(stored.text).not.toContain('Typed after the demotion.');
   });
