@@ -51,7 +51,7 @@ export function averageMass(graph: MolGraph): number {
     sum += atom.isotope === null ? ATOMIC_WEIGHT[atom.element] : nuclideMass(atom.element, atom.isotope);
     sum += atom.hydrogens * ATOMIC_WEIGHT.H;
   }
-  return sum;
+  return withoutFloatNoise(sum);
 }
 
 /** Monoisotopic mass (Da): the most abundant isotope of every unlabelled atom. */
@@ -61,5 +61,13 @@ export function monoisotopicMass(graph: MolGraph): number {
     sum += nuclideMass(atom.element, atom.isotope ?? MOST_ABUNDANT[atom.element]);
     sum += atom.hydrogens * nuclideMass('H', 1);
   }
-  return sum;
+  return withoutFloatNoise(sum);
+}
+
+/**
+ * Summing binary floating-point numbers leaves noise in the last digits (130.18699999999998);
+ * nine decimals keep every digit the atomic-weight and isotopic-mass tables give and drop it.
+ */
+function withoutFloatNoise(mass: number): number {
+  return Math.round(mass * 1e9) / 1e9;
 }
