@@ -1,3 +1,4 @@
+import { ATOMIC_WEIGHT, MOST_ABUNDANT } from '../formula/elements';
 import { StereoRefusal } from './refusal';
 
 // Atomic numbers (CIP Rule 1a, IUPAC 2013 P-92.1.4.1).
@@ -14,33 +15,17 @@ export function atomicNumber(symbol: string): number {
 
 /**
  * Rule 2 (P-92.1.4.2, higher mass number first) needs a value for atoms without an isotope label:
- * the standard atomic weight (CIAAW 2021 conventional values) stands for the natural mixture, and
+ * the standard atomic weight (the engine's CIAAW 2021 table) stands for the natural mixture, and
  * the mass number of the most abundant isotope marks the one comparison that weight cannot settle
  * (a label naming that isotope against the unlabelled element), which we refuse.
+ * Returns a positive number when the labelled isotope ranks higher than the unlabelled element.
  */
-const NATURAL: Record<string, { weight: number; commonest: number }> = {
-  H: { weight: 1.008, commonest: 1 },
-  B: { weight: 10.81, commonest: 11 },
-  C: { weight: 12.011, commonest: 12 },
-  N: { weight: 14.007, commonest: 14 },
-  O: { weight: 15.999, commonest: 16 },
-  F: { weight: 18.998, commonest: 19 },
-  Si: { weight: 28.085, commonest: 28 },
-  P: { weight: 30.974, commonest: 31 },
-  S: { weight: 32.06, commonest: 32 },
-  Cl: { weight: 35.45, commonest: 35 },
-  Se: { weight: 78.971, commonest: 80 },
-  Br: { weight: 79.904, commonest: 79 },
-  I: { weight: 126.9, commonest: 127 },
-};
-
-/** Compares a labelled isotope with the unlabelled element: positive when the label ranks higher. */
 export function compareLabelledWithNatural(element: string, massNumber: number): number {
-  const natural = NATURAL[element];
-  if (!natural || natural.commonest === massNumber) {
+  const weight = ATOMIC_WEIGHT[element];
+  if (weight === undefined || MOST_ABUNDANT[element] === massNumber) {
     throw new StereoRefusal(
       `ranking [${massNumber}${element}] against unlabelled ${element} (Rule 2) is not decided with certainty`,
     );
   }
-  return Math.sign(massNumber - natural.weight);
+  return Math.sign(massNumber - weight);
 }
