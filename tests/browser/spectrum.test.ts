@@ -1,10 +1,9 @@
-import { ListObjectsV2Command } from '@aws-sdk/client-s3';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import type { Browser } from 'playwright-core';
 import { signedIn } from '../support/api';
 import { launchBrowser, signIn } from '../support/browser';
 import { startServer, type TestServer } from '../support/server';
-import { uploadFiles } from '../support/uploads';
+import { storedAttachmentKeys, uploadFiles } from '../support/uploads';
 
 // Uploads a spectrum through the page's file panel in real headless Chromium against the real
 // server (built client from dist/client: run `npx vite build` first) and looks at the plot.
@@ -112,7 +111,7 @@ describe('spectrum upload in the browser', () => {
     const page = await context.newPage();
     await signIn(page, server.url, 'chemist@saltmarsh.test', 'quillane-demo');
     await page.goto(`${server.url}/pages/${pageId}`);
-    const keysBefore = await storedKeys();
+    const keysBefore = await storedAttachmentKeys(server.deps);
     // Chromium's own network throttling slows the upload enough to watch it and cancel it.
     const cdp = await context.newCDPSession(page);
     await cdp.send('Network.enable');
@@ -129,7 +128,7 @@ describe('spectrum upload in the browser', () => {
     await cdp.send('Network.emulateNetworkConditions', { offline: false, latency: 0, downloadThroughput: -1, uploadThroughput: -1 });
     const chemist = await signedIn(server.url, 'chemist@saltmarsh.test');
     // The server notices the aborted request: no object stays in the bucket and no row is written.
-    await expect.poll(async () => (await storedKeys()).length, { timeout: 10_000 }).toBe(keysBefore.length);
+    await expect.poll(async () => (await storedAttachmentKeys(server.deps)).length, { timeout: 10_000 }).toBe(keysBefore.length);
     const list = await chemist.get(`/api/pages/${pageId}/attachments`);
     expect(list.body.map((a: { displayName: string }) => a.displayName)).not.toContain('slow raw data.bin');
     await context.close();
@@ -243,8 +242,3 @@ describe('a spectrum inside the page text', () => {
     await context.close();
   });
 });
-
-async function storedKeys(): Promise<string[]> {
-  const listed = await server.deps.storage.client.send(new ListObjectsV2Command({ Bucket: server.deps.storage.bucket, Prefix: 'attachments/' }));
-  return (listed.Contents ?? []).map((o) => o.Key!);
-}

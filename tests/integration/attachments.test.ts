@@ -1,4 +1,3 @@
-import { ListObjectsV2Command } from '@aws-sdk/client-s3';
 import { and, eq } from 'drizzle-orm';
 import { createHash } from 'node:crypto';
 import http from 'node:http';
@@ -7,7 +6,7 @@ import { attachments, auditEvents, pages } from '../../server/db/schema';
 import { pageAttachmentChecksums } from '../../server/files/checksums';
 import { ApiClient, signedIn } from '../support/api';
 import { startServer, type TestServer } from '../support/server';
-import { generatedBytes, uploadFiles } from '../support/uploads';
+import { generatedBytes, storedAttachmentKeys, uploadFiles } from '../support/uploads';
 
 // Files go through the real app into the real s3rver fake and come back through the app.
 // Accounts are the seeded demo people; every test works on a notebook or page of its own.
@@ -25,19 +24,6 @@ async function newPage(client: ApiClient, notebook: string, title: string): Prom
   const response = await client.post(`/api/notebooks/${notebook}/pages`, { title });
   expect(response.status).toBe(201);
   return response.body.id;
-}
-
-async function storedKeys(): Promise<string[]> {
-  const keys: string[] = [];
-  let token: string | undefined;
-  do {
-    const page = await server.deps.storage.client.send(
-      new ListObjectsV2Command({ Bucket: server.deps.storage.bucket, Prefix: 'attachments/', ContinuationToken: token }),
-    );
-    keys.push(...(page.Contents ?? []).map((o) => o.Key!));
-    token = page.NextContinuationToken;
-  } while (token);
-  return keys.sort();
 }
 
 async function download(client: ApiClient, id: string): Promise<{ status: number; bytes: Buffer; headers: Headers }> {
@@ -178,11 +164,11 @@ describe('size limit', () => {
   });
 
   it('refuses with 413 from the declared length, before reading the body', async () => {
-    const before = await storedKeys();
+    const before = await storedAttachmentKeys(server.deps);
     const response = await uploadFiles(client, pageId, [{ name: 'too-big.bin', content: Buffer.alloc(limit + 100 * 1024) }]);
     expect(response.status).toBe(413);
     expect(response.body.error.code).toBe('too_large');
-    expect(await storedKeys()).toEqual(before);
+    expect(await storedAttachmentKeys(server.deps)).toEqual(before);
   });
 
   it('answers 413 without waiting for the body when the declared length is over', async () => {
@@ -208,7 +194,7 @@ describe('size limit', () => {
   });
 
   it('aborts a streamed upload that goes over, deletes what was stored and keeps nothing', async () => {
-    const before = await storedKeys();
+    const before = await storedAttachmentKeys(server.deps);
     const rowsBefore = await server.deps.db.select({ id: attachments.id }).from(attachments).where(eq(attachments.pageId, pageId));
     // No Content-Length: only counting while streaming can notice. Over 5 MiB, so a part was sent already.
     const response = await uploadFiles(
@@ -221,7 +207,7 @@ describe('size limit', () => {
       { chunked: true },
     );
     expect(response.status).toBe(413);
-    expect(await storedKeys()).toEqual(before);
+    expect(await storedAttachmentKeys(server.deps)).toEqual(before);
     const rowsAfter = await server.deps.db.select({ id: attachments.id }).from(attachments).where(eq(attachments.pageId, pageId));
     expect(rowsAfter).toHaveLength(rowsBefore.length);
     // The server is still fine afterwards.
@@ -271,10 +257,10 @@ describe('who may do what', () => {
     expect((await chemist2.delete(`/api/attachments/${mine.body[0].id}`)).status).toBe(403);
     // chemist owns the notebook and may remove anyone's file.
     const key = `attachments/${uploaded.body[0].id}`;
-    expect(await storedKeys()).toContain(key);
+    expect(await storedAttachmentKeys(server.deps)).toContain(key);
     expect((await chemist.delete(`/api/attachments/${uploaded.body[0].id}`)).status).toBe(204);
     expect((await chemist.get(`/api/attachments/${uploaded.body[0].id}`)).status).toBe(404);
-    expect(await storedKeys()).not.toContain(key);
+    expect(await storedAttachmentKeys(server.deps)).not.toContain(key);
     const [event] = await server.deps.db
       .select()
       .from(auditEvents)

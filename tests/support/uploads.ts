@@ -1,4 +1,6 @@
+import { ListObjectsV2Command } from '@aws-sdk/client-s3';
 import { randomUUID } from 'node:crypto';
+import type { AppDeps } from '../../server/context';
 import type { ApiClient } from './api';
 
 export interface UploadPart {
@@ -91,4 +93,16 @@ export function generatedBytes(total: number, seed = 0x9e3779b9, chunkSize = 1 <
       yield chunk;
     }
   };
+}
+
+/** Every attachment object in the bucket, sorted; follows continuation tokens past one listing page. */
+export async function storedAttachmentKeys(deps: AppDeps): Promise<string[]> {
+  const keys: string[] = [];
+  let token: string | undefined;
+  do {
+    const page = await deps.storage.client.send(new ListObjectsV2Command({ Bucket: deps.storage.bucket, Prefix: 'attachments/', ContinuationToken: token }));
+    keys.push(...(page.Contents ?? []).map((o) => o.Key!));
+    token = page.NextContinuationToken;
+  } while (token);
+  return keys.sort();
 }
