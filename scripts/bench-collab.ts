@@ -4,13 +4,12 @@ import os from 'node:os';
 import path from 'node:path';
 import { monitorEventLoopDelay } from 'node:perf_hooks';
 import { parseArgs } from 'node:util';
-import { createBinding, syncLexicalUpdateToYjs } from '@lexical/yjs';
 import { asc, eq, gt, and, sql } from 'drizzle-orm';
-import { $createParagraphNode, $createTextNode, $getRoot, createEditor } from 'lexical';
+import { $createParagraphNode, $createTextNode, $getRoot } from 'lexical';
 import { WebSocket } from 'ws';
 import { WebsocketProvider } from 'y-websocket';
 import * as Y from 'yjs';
-import { silentProvider } from '../server/collab/projection';
+import { writeThroughEditor } from '../server/collab/editorWrite';
 import { connectDatabase } from '../server/db/client';
 import { collabDocuments, collabUpdates, notebooks, pageContent } from '../server/db/schema';
 import { seedDemo } from '../server/seed/demo';
@@ -19,7 +18,6 @@ import { freePort } from '../server/services/ports';
 import { startLocalStack } from '../server/services/stack';
 import { createStorage, ensureBucket } from '../server/storage/s3';
 import { loadConfig } from '../server/env';
-import { pageNodes } from '../shared/editor';
 
 /**
  * `npm run bench:collab`: N simulated editors on one page over loopback, each appending a token
@@ -90,15 +88,9 @@ async function connect(url: string, pageId: string, cookie: string): Promise<{ d
 
 /** One paragraph per editor, written by a real Lexical binding so the page is what browsers write. */
 function seedParagraphs(doc: Y.Doc): void {
-  const provider = silentProvider;
-  const editor = createEditor({ namespace: 'bench', nodes: pageNodes, onError: (e) => { throw e; } });
-  const binding = createBinding(editor, provider, 'page', doc, new Map([['page', doc]]));
-  editor.registerUpdateListener(({ prevEditorState, editorState, dirtyElements, dirtyLeaves, normalizedNodes, tags }) =>
-    syncLexicalUpdateToYjs(binding, provider, prevEditorState, editorState, dirtyElements, dirtyLeaves, normalizedNodes, tags),
-  );
-  editor.update(() => {
+  writeThroughEditor(doc, () => {
     for (let i = 0; i < EDITORS; i += 1) $getRoot().append($createParagraphNode().append($createTextNode(`Editor ${i}: `)));
-  }, { discrete: true });
+  });
 }
 
 function percentile(sorted: number[], p: number): number {

@@ -1,7 +1,5 @@
-import { createBinding, syncLexicalUpdateToYjs } from '@lexical/yjs';
 import { $createParagraphNode, $getRoot } from 'lexical';
-import * as Y from 'yjs';
-import { createProjectionEditor, silentProvider } from './projection';
+import { updateWrittenBy } from './editorWrite';
 
 /**
  * The Yjs update that gives a new page its first (empty) paragraph, written by a headless editor
@@ -11,14 +9,5 @@ import { createProjectionEditor, silentProvider } from './projection';
  * adding their own.
  */
 export function firstParagraphUpdate(): Uint8Array {
-  const doc = new Y.Doc();
-  const editor = createProjectionEditor();
-  const binding = createBinding(editor, silentProvider, 'page', doc, new Map([['page', doc]]));
-  editor.registerUpdateListener(({ prevEditorState, editorState, dirtyElements, dirtyLeaves, normalizedNodes, tags }) => {
-    syncLexicalUpdateToYjs(binding, silentProvider, prevEditorState, editorState, dirtyElements, dirtyLeaves, normalizedNodes, tags);
-  });
-  editor.update(() => $getRoot().append($createParagraphNode()), { discrete: true });
-  const update = Y.encodeStateAsUpdate(doc);
-  doc.destroy();
-  return update;
+  return updateWrittenBy(() => $getRoot().append($createParagraphNode()));
 }

@@ -1,13 +1,11 @@
 import { $createListItemNode, $createListNode } from '@lexical/list';
 import { $createHeadingNode } from '@lexical/rich-text';
-import { createBinding, syncLexicalUpdateToYjs } from '@lexical/yjs';
-import { $createParagraphNode, $createTextNode, $getRoot, createEditor, type LexicalNode } from 'lexical';
+import { $createParagraphNode, $createTextNode, $getRoot, type LexicalNode } from 'lexical';
 import { randomUUID } from 'node:crypto';
 import { Molecule } from 'openchemlib';
-import * as Y from 'yjs';
 import { describe } from '../../shared/chem';
-import { AttachmentEmbedNode, pageNodes, ReagentsNode, StructureNode, type ReagentRow } from '../../shared/editor';
-import { silentProvider } from '../collab/projection';
+import { AttachmentEmbedNode, ReagentsNode, StructureNode, type ReagentRow } from '../../shared/editor';
+import { updateWrittenBy } from '../collab/editorWrite';
 
 /** A page body described block by block, for content written by the server itself (the demo). */
 export type PageBlock =
@@ -37,17 +35,7 @@ export async function pageDocumentUpdate(blocks: PageBlock[]): Promise<Uint8Arra
   for (const block of blocks) {
     if ('structure' in block) structures.set(block.structure.label, await structureFields(block.structure.smiles, block.structure.label));
   }
-
-  const doc = new Y.Doc();
-  const editor = createEditor({ namespace: 'page-document', nodes: pageNodes, onError: (error) => { throw error; } });
-  const binding = createBinding(editor, silentProvider, 'page', doc, new Map([['page', doc]]));
-  editor.registerUpdateListener(({ prevEditorState, editorState, dirtyElements, dirtyLeaves, normalizedNodes, tags }) => {
-    syncLexicalUpdateToYjs(binding, silentProvider, prevEditorState, editorState, dirtyElements, dirtyLeaves, normalizedNodes, tags);
-  });
-  editor.update(() => $getRoot().append(...blocks.map((block) => $blockNode(block, structures))), { discrete: true });
-  const update = Y.encodeStateAsUpdate(doc);
-  doc.destroy();
-  return update;
+  return updateWrittenBy(() => $getRoot().append(...blocks.map((block) => $blockNode(block, structures))));
 }
 
 function $blockNode(block: PageBlock, structures: Map<string, { structureKey: string; molfile: string; smiles: string; label: string }>): LexicalNode {
