@@ -1,20 +1,12 @@
 import type { ReactNode } from 'react';
 import { NavLink } from 'react-router-dom';
+import { initials } from '../lib/format';
 import { Wordmark } from './Wordmark';
 
 export interface NavItem {
   to: string;
   label: string;
   icon: ReactNode;
-}
-
-function initials(name: string): string {
-  return name
-    .split(/\s+/)
-    .filter(Boolean)
-    .slice(0, 2)
-    .map((part) => part[0]!.toUpperCase())
-    .join('');
 }
 
 /** The signed-in frame: a left rail with the mark, navigation and the person, and the work area. */

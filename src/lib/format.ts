@@ -13,3 +13,13 @@ export function formatDate(iso: string): string {
 export function formatPageNumber(n: number): string {
   return String(n).padStart(3, '0');
 }
+
+/** A person's monogram for avatars: "Maren Holt" → "MH". */
+export function initials(name: string): string {
+  return name
+    .split(/\s+/)
+    .filter(Boolean)
+    .slice(0, 2)
+    .map((word) => word[0]!.toUpperCase())
+    .join('');
+}

@@ -1,13 +1,5 @@
+import { initials } from '../../../lib/format';
 import type { PresentPerson } from './useCollabStatus';
-
-function initials(name: string): string {
-  return name
-    .split(/\s+/)
-    .filter(Boolean)
-    .slice(0, 2)
-    .map((word) => word[0]!.toUpperCase())
-    .join('');
-}
 
 /** Who has the page open, each in the colour of their caret. */
 export function PresenceList({ people }: { people: PresentPerson[] }) {
