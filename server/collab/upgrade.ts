@@ -4,9 +4,9 @@ import type { User } from 'lucia';
 import { pageAccess, type PageAccess } from '../auth/access';
 import type { AppDeps } from '../context';
 import { HttpError } from '../http/errors';
+import { idFrom } from '../http/params';
 
 const COLLAB_PATH = /^\/collab\/([^/?#]+)\/?(?:[?#].*)?$/;
-const UUID = /^[0-9a-f]{8}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{12}$/i;
 
 export interface UpgradeGrant {
   pageId: string;
@@ -27,7 +27,7 @@ export function collabPageId(url: string | undefined): string | null {
  * (else 404, as the API does). Throws HttpError for the refusal to send.
  */
 export async function authorizeUpgrade(deps: AppDeps, req: http.IncomingMessage, pageId: string): Promise<UpgradeGrant> {
-  if (!UUID.test(pageId)) throw new HttpError(404, 'not_found', 'Page was not found');
+  const id = idFrom(pageId, 'Page');
   const origin = req.headers.origin;
   if (origin && !allowedOrigin(deps, req, origin)) {
     throw new HttpError(403, 'bad_origin', 'This connection did not come from the Quillane app (Origin check failed)');
@@ -35,7 +35,7 @@ export async function authorizeUpgrade(deps: AppDeps, req: http.IncomingMessage,
   const sessionId = deps.auth.readSessionCookie(req.headers.cookie ?? '');
   const { user, session } = sessionId ? await deps.auth.validateSession(sessionId) : { user: null, session: null };
   if (!user || !session) throw new HttpError(401, 'not_signed_in', 'Please sign in first');
-  const access = await pageAccess(deps.db, user, pageId.toLowerCase());
+  const access = await pageAccess(deps.db, user, id);
   return { pageId: access.page.id, sessionId: session.id, user, access };
 }
 
