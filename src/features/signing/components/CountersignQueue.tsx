@@ -2,7 +2,7 @@ import { Link } from 'react-router-dom';
 import { EmptyState } from '../../../components/EmptyState';
 import { ErrorState } from '../../../components/ErrorState';
 import { LoadingState } from '../../../components/LoadingState';
-import { formatDateTime } from '../../../lib/format';
+import { formatDateTime, formatPageNumber } from '../../../lib/format';
 import { useCountersignQueue } from '../api/queries';
 
 function waited(seconds: number): string {
@@ -26,7 +26,7 @@ export function CountersignQueue() {
         <li key={item.requestId} className="flex flex-wrap items-center justify-between gap-3 px-5 py-3">
           <div className="min-w-0">
             <Link to={`/pages/${item.pageId}`} className="font-medium text-tide-700 hover:underline">
-              p. {String(item.pageNumber).padStart(3, '0')} {item.pageTitle}
+              p. {formatPageNumber(item.pageNumber)} {item.pageTitle}
               {item.addendumNumber !== null && ` · addendum ${item.addendumNumber}`}
             </Link>
             <div className="text-sm text-ink-soft">
