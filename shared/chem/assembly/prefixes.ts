@@ -1,4 +1,4 @@
-import { locantText, type Prefix } from '../numbering/context';
+import { locantText, type Prefix, type SubstituentName } from '../numbering/context';
 import { compareAlphanumerical } from './alphanumeric';
 import { enclose } from './enclosing';
 import { complexMultiplier, multiplier } from './numerals';
@@ -22,15 +22,23 @@ export function citePrefixes(prefixes: Prefix[], omitLocants: boolean): CitedPre
   return groups.map((group) => {
     const { substituent } = group[0];
     const locants = group.map((p) => p.locant).sort((a, b) => a - b).map(locantText);
-    const count = group.length;
-    const wrapped = substituent.enclose ? enclose(substituent.name) : substituent.name;
-    let mult = '';
-    if (count > 1) mult = substituent.compound ? complexMultiplier(count) : multiplier(count);
-    const joiner = /^(sec|tert)-/.test(wrapped) && mult ? '-' : '';
-    const body = substituent.compound && count > 1 && !substituent.enclose ? enclose(wrapped) : wrapped;
+    const [mult, body] = multipliedParts(substituent, group.length);
+    const joiner = /^(sec|tert)-/.test(body) && mult ? '-' : '';
     const text = (omitLocants ? '' : `${locants.join(',')}-`) + mult + joiner + body;
     return { locants: omitLocants ? [] : locants, text, name: substituent.name };
   });
+}
+
+/**
+ * `count` equal substituents as cited: the multiplying prefix (P-16.9: di, tri for simple prefixes;
+ * bis, tris for substituted ones) and the name after it, enclosed where it carries locants or is
+ * substituted (P-16.5): ['di', 'methyl'], ['', '(propan-2-yl)'], ['bis', '(2-chloroethyl)'].
+ */
+export function multipliedParts(substituent: SubstituentName, count: number): [string, string] {
+  const wrapped = substituent.enclose ? enclose(substituent.name) : substituent.name;
+  if (count === 1) return ['', wrapped];
+  if (!substituent.compound) return [multiplier(count), wrapped];
+  return [complexMultiplier(count), substituent.enclose ? wrapped : enclose(wrapped)];
 }
 
 export function joinPrefixes(cited: CitedPrefix[]): string {

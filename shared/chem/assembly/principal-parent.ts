@@ -2,9 +2,9 @@ import type { NamingContext } from '../numbering/context';
 import { N_LOCANT } from '../numbering/context';
 import type { Evaluated } from '../numbering/evaluate';
 import { nameSubstituent } from '../substituents/substituent';
-import { enclose } from './enclosing';
 import { hydrideName } from './hydride';
-import { complexMultiplier, multiplier } from './numerals';
+import { multiplier } from './numerals';
+import { multipliedParts } from './prefixes';
 import { NamingRefusal } from './refusal';
 import { principalLocantsOmitted, retainedPrincipalParent, withSuffix } from './suffixes';
 
@@ -59,7 +59,6 @@ export function esterAlkyl(ctx: NamingContext, e: Evaluated): { text: string; at
   const [first] = groups;
   if (groups.some((g) => g.name !== first.name)) throw new NamingRefusal('esters with different alkyl groups need O-locants (P-65.6.3.2.2), which are not built yet');
   const atoms = groups.flatMap((g) => g.atoms);
-  if (groups.length === 1) return { text: first.name, atoms };
-  if (first.compound) return { text: complexMultiplier(groups.length) + enclose(first.name), atoms };
-  return { text: multiplier(groups.length) + (first.enclose ? enclose(first.name) : first.name), atoms };
+  // A single alkyl word stands alone, without enclosing marks: propan-2-yl benzoate.
+  return { text: groups.length === 1 ? first.name : multipliedParts(first, groups.length).join(''), atoms };
 }

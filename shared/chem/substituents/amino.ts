@@ -1,6 +1,5 @@
-import { enclose } from '../assembly/enclosing';
 import { NamingRefusal } from '../assembly/refusal';
-import { complexMultiplier, multiplier } from '../assembly/numerals';
+import { multipliedParts } from '../assembly/prefixes';
 import type { NamingContext, SubstituentName } from '../numbering/context';
 import { nameSubstituent } from './substituent';
 
@@ -18,8 +17,5 @@ export function amino(ctx: NamingContext, nitrogen: number, from: number, atoms:
   if (groups.some((g) => g.name !== first.name)) {
     throw new NamingRefusal(`the nitrogen atom ${nitrogen + 1} carries two different groups; such amino prefixes (P-62.2.2) are not named yet`);
   }
-  const body = first.enclose ? enclose(first.name) : first.name;
-  const count = first.compound ? complexMultiplier(groups.length) : multiplier(groups.length);
-  const name = groups.length > 1 && first.compound && !first.enclose ? `${count}${enclose(body)}amino` : `${count}${body}amino`;
-  return { name, compound: true, enclose: true, atoms };
+  return { name: `${multipliedParts(first, groups.length).join('')}amino`, compound: true, enclose: true, atoms };
 }
