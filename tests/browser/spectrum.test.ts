@@ -2,6 +2,7 @@ import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import type { Browser } from 'playwright-core';
 import { signedIn } from '../support/api';
 import { launchBrowser, signIn } from '../support/browser';
+import { newDemoNotebookPage } from '../support/fixtures';
 import { startServer, type TestServer } from '../support/server';
 import { storedAttachmentKeys, uploadFiles } from '../support/uploads';
 
@@ -40,10 +41,7 @@ function infraredFile(): string {
 beforeAll(async () => {
   server = await startServer();
   browser = await launchBrowser();
-  const chemist = await signedIn(server.url, 'chemist@saltmarsh.test');
-  const notebooks = await chemist.get('/api/notebooks');
-  const notebook = notebooks.body.find((n: { title: string }) => n.title === 'Fruity esters from short-chain acids');
-  pageId = (await chemist.post(`/api/notebooks/${notebook.id}/pages`, { title: 'Browser spectrum upload' })).body.id;
+  pageId = await newDemoNotebookPage(server.url, 'Browser spectrum upload');
 });
 
 afterAll(async () => {
@@ -197,9 +195,7 @@ describe('upload limit in the browser', () => {
 describe('a spectrum inside the page text', () => {
   it('shows a spectrum linked to a structure block side by side with that structure', async () => {
     const chemist = await signedIn(server.url, 'chemist@saltmarsh.test');
-    const notebooks = await chemist.get('/api/notebooks');
-    const notebook = notebooks.body.find((n: { title: string }) => n.title === 'Fruity esters from short-chain acids');
-    const textPage = (await chemist.post(`/api/notebooks/${notebook.id}/pages`, { title: 'Spectrum beside its structure' })).body.id;
+    const textPage = await newDemoNotebookPage(server.url, 'Spectrum beside its structure');
     const uploaded = await uploadFiles(chemist, textPage, [{ name: 'ester IR.jdx', content: Buffer.from(infraredFile()) }]);
     expect(uploaded.status).toBe(201);
 

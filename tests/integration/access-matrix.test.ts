@@ -2,6 +2,7 @@ import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { ApiClient, type ApiResponse } from '../support/api';
 import { createPerson, insertInvitation, insertPasswordReset, signedInAs, uniqueEmail, type TestPerson } from '../support/fixtures';
 import { startServer, type TestServer } from '../support/server';
+import { newPage } from '../support/signing';
 
 // Every route of /work/notes/API.md tried by every kind of caller. The expected statuses are the
 // table in API.md and the role meanings in DESIGN.md; "non-members get 404, not 403" hides which
@@ -32,7 +33,7 @@ beforeAll(async () => {
   notebookId = (await owner.post('/api/notebooks', { title: 'Matrix notebook' })).body.id;
   expect((await owner.put(`/api/notebooks/${notebookId}/members`, { userId: people.supervisor.id, role: 'editor' })).status).toBe(200);
   expect((await owner.put(`/api/notebooks/${notebookId}/members`, { userId: people.viewer.id, role: 'reader' })).status).toBe(200);
-  pageId = (await owner.post(`/api/notebooks/${notebookId}/pages`, { title: 'Matrix page' })).body.id;
+  pageId = await newPage(owner, notebookId, 'Matrix page');
   liveInvitationToken = await insertInvitation(server.deps);
 });
 afterAll(() => server.close());

@@ -2,6 +2,7 @@ import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import type { ApiClient } from '../support/api';
 import { signedIn } from '../support/api';
 import { startServer, type TestServer } from '../support/server';
+import { newPage } from '../support/signing';
 import { uploadFiles } from '../support/uploads';
 
 // Spectra uploaded through the real app: parsed on arrival, kept as files whatever happens.
@@ -15,7 +16,7 @@ beforeAll(async () => {
   chemist = await signedIn(server.url, 'chemist@saltmarsh.test');
   const notebooks = await chemist.get('/api/notebooks');
   const notebookId = notebooks.body.find((n: { title: string }) => n.title === 'Solvent and reagent checks').id;
-  pageId = (await chemist.post(`/api/notebooks/${notebookId}/pages`, { title: 'Spectra upload checks' })).body.id;
+  pageId = await newPage(chemist, notebookId, 'Spectra upload checks');
 });
 
 afterAll(async () => {

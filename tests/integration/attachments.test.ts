@@ -6,6 +6,7 @@ import { attachments, auditEvents, pages } from '../../server/db/schema';
 import { pageAttachmentChecksums } from '../../server/files/checksums';
 import { ApiClient, signedIn } from '../support/api';
 import { startServer, type TestServer } from '../support/server';
+import { newPage } from '../support/signing';
 import { generatedBytes, storedAttachmentKeys, uploadFiles } from '../support/uploads';
 
 // Files go through the real app into the real s3rver fake and come back through the app.
@@ -19,12 +20,6 @@ let pageId: string;
 let notebookId: string;
 
 const sha256 = (bytes: Buffer) => createHash('sha256').update(bytes).digest('hex');
-
-async function newPage(client: ApiClient, notebook: string, title: string): Promise<string> {
-  const response = await client.post(`/api/notebooks/${notebook}/pages`, { title });
-  expect(response.status).toBe(201);
-  return response.body.id;
-}
 
 async function download(client: ApiClient, id: string): Promise<{ status: number; bytes: Buffer; headers: Headers }> {
   const response = await fetch(`${client.baseUrl}/api/attachments/${id}/content`, { headers: { cookie: client.sessionCookie } });

@@ -2,6 +2,7 @@ import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import type { ApiClient, ApiResponse } from '../support/api';
 import { createPerson, signedInAs, type TestPerson } from '../support/fixtures';
 import { startServer, type TestServer } from '../support/server';
+import { newPage } from '../support/signing';
 
 // The contract (DESIGN.md, RULES.md): bad input gets `{ error: { code, message } }` with a fitting
 // 4xx and changes nothing, never a 500. Status meanings per RFC 9110 §15.5 (400 Bad Request,
@@ -17,7 +18,7 @@ beforeAll(async () => {
   admin = await createPerson(server.deps, 'admin', 'input-admin');
   api = await signedInAs(server.url, admin);
   notebookId = (await api.post('/api/notebooks', { title: 'Bad input' })).body.id;
-  pageId = (await api.post(`/api/notebooks/${notebookId}/pages`, { title: 'Unchanged' })).body.id;
+  pageId = await newPage(api, notebookId, 'Unchanged');
 });
 afterAll(() => server.close());
 

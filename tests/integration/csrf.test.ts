@@ -2,6 +2,7 @@ import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { ApiClient } from '../support/api';
 import { createPerson, insertInvitation, insertPasswordReset, signedInAs, type TestPerson } from '../support/fixtures';
 import { startServer, type TestServer } from '../support/server';
+import { newPage } from '../support/signing';
 
 // CSRF defence by origin: OWASP Cross-Site Request Forgery Prevention Cheat Sheet, "Verifying
 // Origin With Standard Headers" — a state-changing request whose Origin is missing or is not the
@@ -23,7 +24,7 @@ beforeAll(async () => {
   member = await createPerson(server.deps, 'chemist', 'csrf-member');
   client = await signedInAs(server.url, admin);
   notebookId = (await client.post('/api/notebooks', { title: 'Origin checks' })).body.id;
-  pageId = (await client.post(`/api/notebooks/${notebookId}/pages`, { title: 'Untouched title' })).body.id;
+  pageId = await newPage(client, notebookId, 'Untouched title');
   await client.put(`/api/notebooks/${notebookId}/members`, { userId: member.id, role: 'reader' });
 
   invitationToken = await insertInvitation(server.deps, 'Csrf Invitee');

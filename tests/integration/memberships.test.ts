@@ -2,6 +2,7 @@ import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import type { ApiClient } from '../support/api';
 import { createPerson, signedInAs, type TestPerson } from '../support/fixtures';
 import { startServer, type TestServer } from '../support/server';
+import { newPage } from '../support/signing';
 
 // Role rules from DESIGN.md and API.md: an organisation viewer is read-only everywhere and can only
 // be a notebook reader; a reader of any organisation role cannot write. Every refused write is
@@ -17,7 +18,7 @@ beforeAll(async () => {
   owner = await createPerson(server.deps, 'chemist', 'members-owner');
   ownerApi = await signedInAs(server.url, owner);
   notebookId = (await ownerApi.post('/api/notebooks', { title: 'Membership rules' })).body.id;
-  pageId = (await ownerApi.post(`/api/notebooks/${notebookId}/pages`, { title: 'Original title' })).body.id;
+  pageId = await newPage(ownerApi, notebookId, 'Original title');
 });
 afterAll(() => server.close());
 

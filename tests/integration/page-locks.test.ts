@@ -2,6 +2,7 @@ import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import type { ApiClient } from '../support/api';
 import { createPerson, signedInAs } from '../support/fixtures';
 import { startServer, type TestServer } from '../support/server';
+import { newPage } from '../support/signing';
 
 // A signed page is locked: no edits at all, only addenda (21 CFR 11.10(e) and 11.70 — a signed
 // record must not change without trace). The lock is set here with SQL, as the signing flow does.
@@ -13,7 +14,7 @@ beforeAll(async () => {
   server = await startServer();
   owner = await signedInAs(server.url, await createPerson(server.deps, 'chemist', 'lock-owner'));
   const notebookId = (await owner.post('/api/notebooks', { title: 'Locks' })).body.id;
-  pageId = (await owner.post(`/api/notebooks/${notebookId}/pages`, { title: 'Signed record' })).body.id;
+  pageId = await newPage(owner, notebookId, 'Signed record');
   await server.deps.pool.query('update pages set locked = true where id = $1', [pageId]);
 });
 afterAll(() => server.close());
