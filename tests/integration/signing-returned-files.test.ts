@@ -2,23 +2,14 @@ import { createHash } from 'node:crypto';
 import { and, desc, eq, isNull } from 'drizzle-orm';
 import { describe, expect, it } from 'vitest';
 import { attachments, auditEvents, signatures } from '../../server/db/schema';
-import { newPage, signBody, signingFrame, writeOnPage } from '../support/signing';
+import { addendumBody, newPage, signBody, signingFrame, verifyReport, writeOnPage } from '../support/signing';
 import { uploadFiles } from '../support/uploads';
 
 const g = signingFrame();
 
 const sha256 = (bytes: Buffer) => createHash('sha256').update(bytes).digest('hex');
 
-interface VerifyBody {
-  intact: boolean;
-  signatures: { addendumId: string | null; withdrawn: boolean; intact: boolean; changes: string[] }[];
-}
-
-async function verify(pageId: string): Promise<VerifyBody> {
-  const response = await g.reader.api.get(`/api/pages/${pageId}/verify`);
-  expect(response.status).toBe(200);
-  return response.body;
-}
+const verify = (pageId: string) => verifyReport(g.reader.api, pageId);
 
 async function sign(pageId: string) {
   const signed = await g.author.api.post(`/api/pages/${pageId}/sign`, signBody(g.author.person, g.supervisor.person.id));
@@ -88,12 +79,7 @@ describe('files uploaded while a page was signed, after the page is returned', (
     await writeOnPage(g.server, g.author.api, pageId, ['Distillation, fraction 2.']);
     await sign(pageId);
     const claimed = await upload(pageId, 'gc-trace.csv', Buffer.from('time (min),signal\n1,2\n2,3\n'));
-    const addendum = await g.author.api.post(`/api/pages/${pageId}/addenda`, {
-      email: g.author.person.email,
-      password: g.author.person.password,
-      meaning: 'performed',
-      text: 'GC trace of fraction 2 added.',
-    });
+    const addendum = await g.author.api.post(`/api/pages/${pageId}/addenda`, addendumBody(g.author.person, 'GC trace of fraction 2 added.'));
     expect(addendum.status).toBe(201);
     const unclaimed = await upload(pageId, 'bp-note.txt', Buffer.from('bp 141 C at 760 mmHg'));
 

@@ -2,7 +2,7 @@ import { randomUUID } from 'node:crypto';
 import { eq } from 'drizzle-orm';
 import { describe, expect, it } from 'vitest';
 import { attachments, pageContent, signatures } from '../../server/db/schema';
-import { countersignBody, newPage, signBody, signingFrame, writeOnPage } from '../support/signing';
+import { countersignBody, newPage, signBody, signingFrame, verifyReport, writeOnPage } from '../support/signing';
 
 const g = signingFrame();
 
@@ -14,11 +14,7 @@ async function witnessedPage(title: string): Promise<string> {
   return pageId;
 }
 
-async function verify(pageId: string) {
-  const response = await g.reader.api.get(`/api/pages/${pageId}/verify`);
-  expect(response.status).toBe(200);
-  return response.body as { intact: boolean; signatures: { role: string; intact: boolean; changes: string[] }[] };
-}
+const verify = (pageId: string) => verifyReport(g.reader.api, pageId);
 
 // 21 CFR 11.10(a): the system must be able to discern invalid or altered records; 11.70: a
 // signature stays linked to its record so it cannot be carried over to changed content. Each test

@@ -2,7 +2,7 @@ import { and, eq } from 'drizzle-orm';
 import { describe, expect, it } from 'vitest';
 import { auditEvents, notebooks, pages } from '../../server/db/schema';
 import { signedIn } from '../support/api';
-import { countersignBody, mailTo, newPage, signBody, signingFrame, writeOnPage } from '../support/signing';
+import { addendumBody, countersignBody, mailTo, newPage, signBody, signingFrame, writeOnPage } from '../support/signing';
 
 const g = signingFrame();
 
@@ -95,13 +95,10 @@ describe('sign → countersign, end to end through the API and the mail catcher'
 
   it('after signing, changes are addenda: dated, signed the same way, optionally countersigned; the original stays intact', async () => {
     const pageId = await signedPage('Addenda page');
-    const added = await g.coEditor.api.post(`/api/pages/${pageId}/addenda`, {
-      email: g.coEditor.person.email,
-      password: g.coEditor.person.password,
-      meaning: 'performed',
-      text: 'The product was redistilled on the next day; bp 141 °C.',
-      supervisorId: g.supervisor2.person.id,
-    });
+    const added = await g.coEditor.api.post(
+      `/api/pages/${pageId}/addenda`,
+      addendumBody(g.coEditor.person, 'The product was redistilled on the next day; bp 141 °C.', g.supervisor2.person.id),
+    );
     expect(added.status).toBe(201);
     const addendum = added.body.addenda[0];
     expect(addendum).toMatchObject({ number: 1, author: { name: 'Test coeditor' } });
@@ -118,12 +115,7 @@ describe('sign → countersign, end to end through the API and the mail catcher'
     expect(verify.body.signatures).toHaveLength(3);
 
     const unsignedPage = await newPage(g.author.api, g.notebookId, 'No addenda on drafts');
-    const refused = await g.author.api.post(`/api/pages/${unsignedPage}/addenda`, {
-      email: g.author.person.email,
-      password: g.author.person.password,
-      meaning: 'performed',
-      text: 'x',
-    });
+    const refused = await g.author.api.post(`/api/pages/${unsignedPage}/addenda`, addendumBody(g.author.person, 'x'));
     expect(refused.status).toBe(409);
     expect(refused.body.error.code).toBe('not_signed');
   });

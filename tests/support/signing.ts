@@ -98,6 +98,27 @@ export const signBody = (person: TestPerson, supervisorId: string, meaning = 'pe
 
 export const countersignBody = (person: TestPerson, meaning = 'witnessed') => ({ email: person.email, password: person.password, meaning });
 
+export const addendumBody = (person: TestPerson, text: string, supervisorId?: string) => ({
+  email: person.email,
+  password: person.password,
+  meaning: 'performed',
+  text,
+  ...(supervisorId ? { supervisorId } : {}),
+});
+
+export interface VerifyReport {
+  intact: boolean;
+  currentHash: string;
+  signatures: { role: string; addendumId: string | null; withdrawn: boolean; intact: boolean; changes: string[] }[];
+}
+
+/** The page's verification report as `api` reads it; anything but a 200 fails the test. */
+export async function verifyReport(api: ApiClient, pageId: string): Promise<VerifyReport> {
+  const response = await api.get<VerifyReport>(`/api/pages/${pageId}/verify`);
+  if (response.status !== 200) throw new Error(`verify: ${response.status} ${JSON.stringify(response.body)}`);
+  return response.body;
+}
+
 /** The caught mail arrives a moment after the send; wait for the message we expect. */
 export async function mailTo(admin: ApiClient, address: string, subjectIncludes: string): Promise<{ subject: string; text: string }> {
   const started = Date.now();
