@@ -1,7 +1,7 @@
 import type { NextFunction, Request, RequestHandler, Response } from 'express';
 import type { Session, User } from 'lucia';
 import type { Role } from '../../shared/schemas/common';
-import { HttpError } from '../http/errors';
+import { HttpError, notSignedIn } from '../http/errors';
 import type { Auth } from './lucia';
 
 declare global {
@@ -32,7 +32,7 @@ export function sessionMiddleware(auth: Auth): RequestHandler {
 
 export function currentUser(res: Response): User {
   const user = res.locals.user;
-  if (!user) throw new HttpError(401, 'not_signed_in', 'Please sign in first');
+  if (!user) throw notSignedIn();
   return user;
 }
 

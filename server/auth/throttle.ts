@@ -1,29 +1,20 @@
 import type { RequestHandler } from 'express';
-import { rateLimit } from 'express-rate-limit';
+import { rateLimit, type Options } from 'express-rate-limit';
 import type { Config } from '../env';
-
-function refuse(retryAfterSeconds: number) {
-  return {
-    error: {
-      code: 'too_many_attempts',
-      message: `Too many failed sign-in attempts. Try again in about ${Math.ceil(retryAfterSeconds / 60)} minutes.`,
-    },
-  };
-}
+import { HttpError } from '../http/errors';
 
 /**
  * Failed sign-ins are limited per account (guessing one password) and, more loosely, per address
  * (spraying many accounts); successful sign-ins do not count.
  */
 export function signInThrottle(config: Config): RequestHandler[] {
-  const windowMs = config.SIGN_IN_WINDOW_SECONDS * 1000;
-  const common = {
-    windowMs,
+  const message = `Too many failed sign-in attempts. Try again in about ${Math.ceil(config.SIGN_IN_WINDOW_SECONDS / 60)} minutes.`;
+  const common: Partial<Options> = {
+    windowMs: config.SIGN_IN_WINDOW_SECONDS * 1000,
     skipSuccessfulRequests: true,
-    standardHeaders: 'draft-8' as const,
+    standardHeaders: 'draft-8',
     legacyHeaders: false,
-    handler: (_req: unknown, res: { status(n: number): { json(b: unknown): void } }) =>
-      res.status(429).json(refuse(config.SIGN_IN_WINDOW_SECONDS)),
+    handler: (_req, _res, next) => next(new HttpError(429, 'too_many_attempts', message)),
   };
   const perAddress = rateLimit({ ...common, limit: config.SIGN_IN_MAX_ATTEMPTS * 4 });
   const perAccount = rateLimit({

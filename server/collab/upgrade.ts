@@ -3,7 +3,7 @@ import type { Duplex } from 'node:stream';
 import type { User } from 'lucia';
 import { pageAccess, type PageAccess } from '../auth/access';
 import type { AppDeps } from '../context';
-import { HttpError } from '../http/errors';
+import { errorBody, HttpError, notSignedIn } from '../http/errors';
 import { idFrom } from '../http/params';
 
 const COLLAB_PATH = /^\/collab\/([^/?#]+)\/?(?:[?#].*)?$/;
@@ -34,7 +34,7 @@ export async function authorizeUpgrade(deps: AppDeps, req: http.IncomingMessage,
   }
   const sessionId = deps.auth.readSessionCookie(req.headers.cookie ?? '');
   const { user, session } = sessionId ? await deps.auth.validateSession(sessionId) : { user: null, session: null };
-  if (!user || !session) throw new HttpError(401, 'not_signed_in', 'Please sign in first');
+  if (!user || !session) throw notSignedIn();
   const access = await pageAccess(deps.db, user, id);
   return { pageId: access.page.id, sessionId: session.id, user, access };
 }
@@ -46,7 +46,7 @@ function allowedOrigin(deps: AppDeps, req: http.IncomingMessage, origin: string)
 
 /** Answers a refused upgrade with a plain HTTP response in the API's error shape, then hangs up. */
 export function refuseUpgrade(socket: Duplex, error: HttpError): void {
-  const body = JSON.stringify({ error: { code: error.code, message: error.message } });
+  const body = JSON.stringify(errorBody(error));
   const reason = { 401: 'Unauthorized', 403: 'Forbidden', 404: 'Not Found', 503: 'Service Unavailable' }[error.status] ?? 'Error';
   socket.end(
     `HTTP/1.1 ${error.status} ${reason}\r\n` +

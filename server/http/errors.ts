@@ -16,6 +16,12 @@ export class HttpError extends Error {
 export const notFound = (what = 'The requested item') => new HttpError(404, 'not_found', `${what} was not found`);
 export const forbidden = (message = 'You are not allowed to do this') => new HttpError(403, 'forbidden', message);
 export const conflict = (code: string, message: string) => new HttpError(409, code, message);
+export const notSignedIn = () => new HttpError(401, 'not_signed_in', 'Please sign in first');
+
+/** The contract's error body: `{ error: { code, message } }` plus any field errors or details. */
+export function errorBody(error: HttpError) {
+  return { error: { code: error.code, message: error.message, ...error.extra } };
+}
 
 function fieldErrors(error: ZodError): Record<string, string> {
   const fields: Record<string, string> = {};
@@ -45,7 +51,7 @@ interface BodyParserError extends Error {
 /** Turns every thrown error into the contract's shape; unexpected ones are logged and hidden. */
 export const errorHandler: ErrorRequestHandler = (error, _req, res, _next) => {
   if (error instanceof HttpError) {
-    res.status(error.status).json({ error: { code: error.code, message: error.message, ...error.extra } });
+    res.status(error.status).json(errorBody(error));
     return;
   }
   const bodyError = error as BodyParserError;

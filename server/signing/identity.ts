@@ -61,10 +61,7 @@ export function signingThrottle(deps: AppDeps): RequestHandler {
     keyGenerator: (_req, res) => `signer:${res.locals.user?.id ?? 'anonymous'}`,
     requestWasSuccessful: (_req, res) => res.statusCode !== 401,
     skipSuccessfulRequests: true,
-    handler: (_req, res) => {
-      res.status(429).json({
-        error: { code: 'too_many_attempts', message: `Too many wrong signature passwords. Try again in about ${Math.ceil(windowSeconds / 60)} minutes.` },
-      });
-    },
+    handler: (_req, _res, next) =>
+      next(new HttpError(429, 'too_many_attempts', `Too many wrong signature passwords. Try again in about ${Math.ceil(windowSeconds / 60)} minutes.`)),
   });
 }
