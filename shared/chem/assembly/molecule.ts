@@ -13,7 +13,7 @@ import { parentPart, renderUnit } from './unit';
 import { suffixWord } from './suffixes';
 import { esterAlkyl } from './principal-parent';
 import { checkScope } from './scope';
-import { compareDescriptorSequences, hasStereoMarks, placeDescriptors } from './stereo-descriptors';
+import { compareDescriptorSequences, hasStereoMarks, placeDescriptors, stereoDescriptors } from './stereo-descriptors';
 import { retainedBenzeneName } from './retained-benzenes';
 
 export interface Explanation {
@@ -54,7 +54,8 @@ function nameOrRefuse(graph: MolGraph, style: NameStyle): Naming {
   if (retained) return { ok: true, name: retained, explanation: explainRetained(tied[0], retained) };
   if (!hasStereoMarks(graph)) return { ok: true, name, explanation: explain(ctx, tied[0]) };
   // Numberings that give the same name may still place descriptors differently.
-  const placed = tied.map((e) => ({ e, descriptors: placeDescriptors(graph, e) }));
+  const stereo = stereoDescriptors(graph);
+  const placed = tied.map((e) => ({ e, descriptors: placeDescriptors(stereo, e) }));
   placed.sort((x, y) => compareDescriptorSequences(x.descriptors.ranked, y.descriptors.ranked));
   const chosen = placed[0];
   return { ok: true, name: withDescriptors(chosen.e, chosen.descriptors.prefix, name), explanation: explain(ctx, chosen.e) };

@@ -1,5 +1,5 @@
 import type { MolGraph } from '../graph/types';
-import { assignStereo } from '../stereo/index';
+import { assignStereo, type StereoAssignment } from '../stereo/index';
 import type { Evaluated } from '../numbering/evaluate';
 import { NamingRefusal } from './refusal';
 
@@ -15,16 +15,21 @@ export function hasStereoMarks(graph: MolGraph): boolean {
   return Boolean(graph.stereoNotes?.length) || graph.atoms.some((a) => a.tetrahedral) || graph.bonds.some((b) => b.doubleBondStereo);
 }
 
+/** CIP descriptors of the whole structure; they do not depend on the parent, so are assigned once. */
+export function stereoDescriptors(graph: MolGraph): StereoAssignment {
+  const stereo = assignStereo(graph);
+  if (stereo.refusal) throw new NamingRefusal(stereo.refusal);
+  return stereo;
+}
+
 /**
- * CIP descriptors from the stereo module, placed per P-91.3/P-93.5: each with the locant of its
+ * CIP descriptors from the stereo module (`stereoDescriptors`), placed per P-91.3/P-93.5: each with the locant of its
  * centre or of its double bond on the parent, in ascending locant order, in parentheses before
  * the complete name: (2R,3S)-…, (2E)-…. Where the parent's own locants are not cited (ethene,
  * methane), the descriptor goes without a locant: (E)-1,2-dichloroethene. Descriptors of atoms
  * inside substituent groups need the substituent's own placement and are refused for now.
  */
-export function placeDescriptors(graph: MolGraph, parent: Evaluated): PlacedDescriptors {
-  const stereo = assignStereo(graph);
-  if (stereo.refusal) throw new NamingRefusal(stereo.refusal);
+export function placeDescriptors(stereo: StereoAssignment, parent: Evaluated): PlacedDescriptors {
   const locantOf = new Map(parent.skeleton.atoms.map((atom, i) => [atom, i + 1]));
   const entries: { locant: number; label: string }[] = [];
   for (const centre of stereo.centres) {
