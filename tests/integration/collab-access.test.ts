@@ -3,8 +3,9 @@ import { afterAll, afterEach, beforeAll, describe, expect, it } from 'vitest';
 import { collabUpdates, sessions } from '../../server/db/schema';
 import { ApiClient, signedIn } from '../support/api';
 import { collabUrl, connectCollab, serverCaughtUp, startCollabServer, upgradeStatus, waitFor, type CollabClient } from '../support/collab';
-import { createPerson, insertPasswordReset, signedInAs, type TestPerson } from '../support/fixtures';
+import { insertPasswordReset, signedInAs } from '../support/fixtures';
 import { startServer, type TestServer } from '../support/server';
+import { member, newPage } from '../support/signing';
 
 // Access is decided at the upgrade and then again whenever it may have changed: membership and
 // role routes and sign-out ask the collaboration hub to re-check the people concerned, and every
@@ -24,27 +25,15 @@ afterEach(() => {
 });
 afterAll(() => server.close());
 
-interface Member {
-  person: TestPerson;
-  api: ApiClient;
-}
-
-async function member(on: TestServer, prefix: string): Promise<Member> {
-  const person = await createPerson(on.deps, 'chemist', prefix);
-  return { person, api: await signedInAs(on.url, person) };
-}
-
 /** A notebook of one's own: an owner and an editor, and one page. */
 async function editingPair(on: TestServer = server) {
-  const owner = await member(on, 'owner');
-  const editor = await member(on, 'editor');
+  const owner = await member(on, 'chemist', 'owner');
+  const editor = await member(on, 'chemist', 'editor');
   const notebook = await owner.api.post('/api/notebooks', { title: 'Access changes while editing' });
   expect(notebook.status).toBe(201);
   const notebookId: string = notebook.body.id;
   expect((await owner.api.put(`/api/notebooks/${notebookId}/members`, { userId: editor.person.id, role: 'editor' })).status).toBe(200);
-  const page = await owner.api.post(`/api/notebooks/${notebookId}/pages`, { title: 'Shared page' });
-  expect(page.status).toBe(201);
-  return { owner, editor, notebookId, pageId: page.body.id as string };
+  return { owner, editor, notebookId, pageId: await newPage(owner.api, notebookId, 'Shared page') };
 }
 
 async function join(on: TestServer, api: ApiClient, pageId: string, cookie = api.sessionCookie): Promise<CollabClient> {

@@ -26,7 +26,8 @@ export interface SigningGroup {
   admin: ApiClient;
 }
 
-async function member(server: TestServer, role: TestPerson['role'], prefix: string): Promise<Member> {
+/** A new person of `role`, signed in on `server`. */
+export async function member(server: TestServer, role: TestPerson['role'], prefix: string): Promise<Member> {
   const person = await createPerson(server.deps, role, prefix);
   return { person, api: await signedInAs(server.url, person) };
 }
