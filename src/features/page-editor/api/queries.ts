@@ -44,11 +44,10 @@ export function useSnapshot(pageId: string, snapshotId: string) {
   });
 }
 
-export function usePageAttachments(pageId: string, enabled: boolean) {
+export function usePageAttachments(pageId: string) {
   return useQuery({
     queryKey: editorKeys.attachments(pageId),
     queryFn: () => api.get<AttachmentSummary[]>(`/api/pages/${encodeURIComponent(pageId)}/attachments`),
-    enabled,
   });
 }
 

@@ -14,7 +14,7 @@ export function AttachmentPicker({
   onPick: (attachmentId: string, linkedStructureKey: string | null) => void;
   onClose: () => void;
 }) {
-  const attachments = usePageAttachments(pageId, true);
+  const attachments = usePageAttachments(pageId);
   const [structureKey, setStructureKey] = useState('');
 
   return (

@@ -48,20 +48,16 @@ export function useVerification(pageId: string) {
   return useQuery({ queryKey: signingKeys.verify(pageId), queryFn: () => api.get<VerifyReport>(`${pagePath(pageId)}/verify`) });
 }
 
-export function useAuditTrail(pageId: string, enabled: boolean) {
-  return useQuery({ queryKey: signingKeys.audit(pageId), queryFn: () => api.get<AuditTrail>(`${pagePath(pageId)}/audit`), enabled });
+export function useAuditTrail(pageId: string) {
+  return useQuery({ queryKey: signingKeys.audit(pageId), queryFn: () => api.get<AuditTrail>(`${pagePath(pageId)}/audit`) });
 }
 
 export function usePrintRecord(pageId: string) {
   return useQuery({ queryKey: signingKeys.print(pageId), queryFn: () => api.get<PrintRecord>(`${pagePath(pageId)}/print`) });
 }
 
-export function useCountersigners(pageId: string, enabled: boolean) {
-  return useQuery({
-    queryKey: signingKeys.countersigners(pageId),
-    queryFn: () => api.get<Countersigner[]>(`${pagePath(pageId)}/countersigners`),
-    enabled,
-  });
+export function useCountersigners(pageId: string) {
+  return useQuery({ queryKey: signingKeys.countersigners(pageId), queryFn: () => api.get<Countersigner[]>(`${pagePath(pageId)}/countersigners`) });
 }
 
 export function useCountersignQueue() {

@@ -12,7 +12,7 @@ import { SignerFields } from './SignerFields';
 
 /** A dated note below the signed original, signed like the page; a countersignature is optional. */
 export function AddendumDialog({ pageId, onClose, onChanged }: { pageId: string; onClose: () => void; onChanged?: () => void }) {
-  const supervisors = useCountersigners(pageId, true);
+  const supervisors = useCountersigners(pageId);
   const add = useAddAddendum(pageId, onChanged);
   const [alert, setAlert] = useState<string | null>(null);
   const textId = useId();

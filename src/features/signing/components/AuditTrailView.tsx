@@ -43,7 +43,7 @@ const columns = [
 
 /** The page's audit trail (21 CFR 11.10(e)) with the chain check and a CSV copy (11.10(b)). */
 export function AuditTrailView({ pageId }: { pageId: string }) {
-  const trail = useAuditTrail(pageId, true);
+  const trail = useAuditTrail(pageId);
   if (trail.isPending) return <LoadingState label="Reading the audit trail…" />;
   if (trail.isError) return <ErrorState error={trail.error} />;
   return (

@@ -12,7 +12,7 @@ import { SignerFields } from './SignerFields';
 
 /** The author signs the page: it locks for everyone and goes to the chosen supervisor. */
 export function SignDialog({ pageId, onClose, onChanged }: { pageId: string; onClose: () => void; onChanged?: () => void }) {
-  const supervisors = useCountersigners(pageId, true);
+  const supervisors = useCountersigners(pageId);
   const sign = useSignPage(pageId, onChanged);
   const [alert, setAlert] = useState<string | null>(null);
   const { register, handleSubmit, setError, formState } = useForm<SignPageInput>({
