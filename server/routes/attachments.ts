@@ -8,6 +8,7 @@ import { pageAccess, type PageAccess } from '../auth/access';
 import { currentUser } from '../auth/middleware';
 import type { AppDeps } from '../context';
 import { attachments, pages, users, type AttachmentRow } from '../db/schema';
+import { attachmentAddedDetails } from '../files/addedEvent';
 import { checkDeclaredSize, receiveFiles } from '../files/receiveUpload';
 import { openObject, removeObject } from '../files/storage';
 import { conflict, forbidden, HttpError, notFound } from '../http/errors';
@@ -115,16 +116,7 @@ export function attachmentRoutes(deps: AppDeps): Router {
             actor: user,
             notebookId: access.notebookId,
             pageId: access.page.id,
-            details: {
-              attachmentId: file.id,
-              name: file.displayName,
-              size: file.size,
-              sha256: file.sha256,
-              mediaType: file.mediaType,
-              addendum: inserted[i].addendum,
-              ...(file.spectrum ? { spectrum: file.spectrum.dataType || file.spectrum.format } : {}),
-              ...(file.parseError ? { parseError: file.parseError } : {}),
-            },
+            details: attachmentAddedDetails(file, inserted[i].addendum),
           });
         }
       });

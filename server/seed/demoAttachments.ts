@@ -4,6 +4,7 @@ import { createHash, randomUUID } from 'node:crypto';
 import { appendInTransaction } from '../audit/record';
 import type { Database } from '../db/client';
 import { attachments, notebooks, pages } from '../db/schema';
+import { attachmentAddedDetails } from '../files/addedEvent';
 import { displayNameFor } from '../files/displayName';
 import { SNIFF_BYTES } from '../files/mediaType';
 import { describeReceived } from '../files/receiveUpload';
@@ -49,7 +50,7 @@ export async function seedDemoAttachments(db: Database, storage: Storage, people
       actor: uploader,
       notebookId: page.notebookId,
       pageId: page.id,
-      details: { attachmentId: id, name: file.displayName, size: file.size, sha256: file.sha256, mediaType: file.mediaType, addendum: false, spectrum: 'INFRARED SPECTRUM' },
+      details: attachmentAddedDetails(file, false),
     });
   });
 }
