@@ -5,8 +5,9 @@ import {
   StructureTextProblem,
 } from '../../../src/features/page-editor/structure/structureText';
 
-// A V2000 molfile for ethanol, written by hand following the CTfile format (BIOVIA "CTfile
-// Formats", counts line and atom/bond blocks); the first header line is blank, as is common.
+// A V2000 molfile for ethanol, written by hand following the published CTfile Formats
+// specification of the MDL molfile (counts line and atom/bond blocks); the first header line is
+// blank, as is common.
 const ethanolMolfile = [
   '',
   '  hand-written',
