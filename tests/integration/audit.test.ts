@@ -64,6 +64,8 @@ describe('the audit trail is append-only', () => {
   });
 });
 
+// 21 CFR 11.10(a) (discern invalid or altered records) and 11.10(e) (changes do not obscure
+// earlier entries); chaining each event to the previous one by hash is common practice, no source.
 describe('the hash chain', () => {
   it('verifies over the whole trail', async () => {
     const check = await verifyChain(server.deps.db);
@@ -89,6 +91,9 @@ describe('the hash chain', () => {
   });
 });
 
+// 21 CFR 11.10(e): the audit trail is available for review and copying; 11.10(b): accurate and
+// complete copies in human-readable and electronic form. 11.10(d): access limited to authorised
+// people (outsiders get 404 as everywhere in the API, anonymous callers 401, RFC 9110 §15.5.2).
 describe('audit trail views and export', () => {
   it('per page: the page’s events in order, with the chain state; readable by a reader, not by outsiders', async () => {
     const trail = await g.reader.api.get(`/api/pages/${pageId}/audit`);

@@ -9,6 +9,8 @@ beforeAll(async () => {
 });
 afterAll(() => server.close());
 
+// Status codes per RFC 9110 §15.5.2 (401 Unauthorized: no valid credentials or session) and
+// §15.3.5 (204 No Content); the error codes are this app's contract (API.md).
 describe('sign-in', () => {
   it('signs a demo account in and /api/me answers who it is', async () => {
     const client = new ApiClient(server.url);
@@ -50,6 +52,7 @@ describe('sign-in', () => {
   });
 
   it('refuses an invited person who has not chosen a password yet', async () => {
+    // An account without a password cannot be signed into with any password: common practice, no source.
     const person = await createPerson(server.deps, 'chemist', 'no-password');
     await server.deps.pool.query('update users set password_hash = null where id = $1', [person.id]);
     const response = await new ApiClient(server.url).post('/api/auth/sign-in', { email: person.email, password: person.password });
@@ -63,6 +66,8 @@ describe('sign-in', () => {
   });
 
   it('ignores a made-up session cookie', async () => {
+    // OWASP Session Management Cheat Sheet (strict session management): only session IDs the
+    // server itself issued are accepted (written from memory).
     const response = await new ApiClient(server.url).request('GET', '/api/me', undefined, {
       headers: { cookie: 'quillane_session=abcdefghijklmnopqrstuvwxyz234567' },
     });
@@ -89,6 +94,7 @@ describe('sign-out', () => {
   });
 
   it('leaves the same person’s other sessions alone', async () => {
+    // Signing out ends this session only (one browser, not every device): common practice, no source.
     const person = await createPerson(server.deps, 'chemist', 'two-browsers');
     const laptop = await signedInAs(server.url, person);
     const desktop = await signedInAs(server.url, person);

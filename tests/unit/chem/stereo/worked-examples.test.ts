@@ -64,6 +64,7 @@ describe('E/Z (P-93.4.2.1)', () => {
     expect(assignStereo(g).doubleBonds).toEqual([{ from: 1, to: 3, label: 'Z' }]);
   });
   it('a terminal =CH2 is not stereogenic: no descriptor even when marked', () => {
+    // Two identical H on one end leave nothing to rank there (IUPAC 2013 P-93.4.2.1, written from memory).
     const g = build([['C', 3], ['C', 1], ['C', 2]], [[0, 1, 1], [1, 2, 2]], {
       doubleBonds: { 1: { reference: [0, -1], relation: 'cis' } },
     });
@@ -71,6 +72,9 @@ describe('E/Z (P-93.4.2.1)', () => {
   });
 });
 
+// A centre with two identical ligands is not stereogenic and gets no CIP descriptor (IUPAC 2013
+// P-92.1, written from memory); RDKit's get_stereo_tags gives none for C[C@@H](C)O either (checked
+// once by hand, not re-run here).
 describe('centres that are not stereogenic get no descriptor', () => {
   it('propan-2-ol marked @ (two methyls)', () => {
     const g = build([['C', 3], ['C', 1], ['O', 1], ['C', 3]], [[0, 1, 1], [1, 2, 1], [1, 3, 1]], {
@@ -110,6 +114,8 @@ describe('pseudo-asymmetric centres, Rule 4c/5 (P-92.1.4.4, P-93.5.1.3)', () => 
   });
 });
 
+// Axial chirality (IUPAC 2013 P-93.5.7, written from memory) is outside what the engine ranks: it
+// refuses rather than labelling. The refusal itself is this project's choice, no outside source.
 describe('refusals instead of guesses', () => {
   it('an allene mark (axial chirality) is refused', () => {
     // C/C=[C@]=C/C style: a tetrahedral mark on the central allene carbon with two neighbours.
