@@ -6,7 +6,6 @@ import { LoadingState } from '../components/LoadingState';
 import { PageBodySlot } from '../components/PageBodySlot';
 import { SafetyNote } from '../components/SafetyNote';
 import { AttachmentsPanel, type AttachmentRenderers } from '../features/attachments';
-import { useMe } from '../features/auth/api/queries';
 import { pageKeys, usePage } from '../features/pages/api/queries';
 import { PageFacts } from '../features/pages/components/PageFacts';
 import { PageTitleEditor } from '../features/pages/components/PageTitleEditor';
@@ -35,7 +34,6 @@ export function PageRoute() {
   const page = usePage(pageId);
   const person = useSignedInPerson();
   const queryClient = useQueryClient();
-  const me = useMe();
 
   if (page.isPending) return <LoadingState label="Opening the page…" />;
   if (page.isError) return <ErrorState error={page.error} />;
@@ -58,16 +56,14 @@ export function PageRoute() {
       <PageFacts page={data} />
       <div className="mt-6 flex-1">
         <PageBodySlot>
-          {me.data && (
-            <PageEditor
-              key={data.id}
-              pageId={data.id}
-              canEdit={data.access.canEdit && !data.locked}
-              me={{ id: me.data.id, name: me.data.name }}
-              embedRenderers={embedRenderers}
-              onAccessChanged={() => queryClient.invalidateQueries({ queryKey: pageKeys.one(data.id) })}
-            />
-          )}
+          <PageEditor
+            key={data.id}
+            pageId={data.id}
+            canEdit={data.access.canEdit && !data.locked}
+            me={{ id: person.id, name: person.name }}
+            embedRenderers={embedRenderers}
+            onAccessChanged={() => queryClient.invalidateQueries({ queryKey: pageKeys.one(data.id) })}
+          />
         </PageBodySlot>
       </div>
       {/* Files added to a signed page are kept as addenda, so writers may still add them. */}
