@@ -12,6 +12,9 @@ describe('npm run -s name (scripts/name.ts)', () => {
     const lines = ['CC(C)C', '', 'C(C', 'CC[Fe]', 'C'.repeat(1200), 'CC(=O)OC(C)=O', 'ClC(Cl)Cl', 'CC(C)CC1CCCCC1'];
     const { stdout, status } = runCli(lines.join('\n') + '\n');
     expect(status).toBe(0);
+    // Names (IUPAC 2013, written from memory): 2-methylpropane P-21.2 (substituent on the longest
+    // chain); trichloromethane P-61.3 (halogen prefixes); (2-methylpropyl)cyclohexane P-44.1.2.2
+    // (a ring is senior to a chain). The error lines are this engine's own wording (no source).
     expect(stdout.split('\n').slice(0, -1)).toEqual([
       '2-methylpropane',
       'error: the SMILES is empty',
@@ -26,6 +29,8 @@ describe('npm run -s name (scripts/name.ts)', () => {
 
   it('switches to traditional names with --style traditional', () => {
     const { stdout } = runCli('CC(C)CC1CCCCC1\nCC(C)(C)CC\n', ['--style', 'traditional']);
+    // 'isobutyl' is a traditional prefix kept for general nomenclature (IUPAC 2013 P-29.6, written
+    // from memory); 2,2-dimethylbutane has no traditional alternative and stays systematic.
     expect(stdout).toBe('isobutylcyclohexane\n2,2-dimethylbutane\n');
   });
 
@@ -34,6 +39,7 @@ describe('npm run -s name (scripts/name.ts)', () => {
     const { stdout, status } = runCli(smiles.join('\n'));
     expect(status).toBe(0);
     const out = stdout.split('\n').slice(0, -1);
+    // One answer per input line is the tool's own contract, no outside source.
     expect(out.length).toBe(smiles.length);
     expect(out.filter((l) => l.startsWith('error'))).toEqual([]);
   });

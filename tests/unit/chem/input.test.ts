@@ -16,6 +16,9 @@ function inputError(input: { smiles: string } | { molfile: string }): ChemInputE
   throw new Error('no error raised');
 }
 
+// The SMILES faults follow the OpenSMILES specification (balanced branches, closed ring bonds,
+// only the organic subset B C N O P S F Cl Br I may go without brackets, '*' is the wildcard atom);
+// the element list and the 999-atom ceiling are this engine's own limits, no outside source.
 describe('bad input gives typed errors that say where and what', () => {
   it.each([
     ['', 'empty', /empty/],
@@ -38,9 +41,11 @@ describe('bad input gives typed errors that say where and what', () => {
   });
 
   it('accepts 999 heavy atoms', () => {
+    // An acyclic alkane is CnH2n+2: common practice, no source.
     expect(describeSync({ smiles: 'C'.repeat(999) }).formula).toBe('C999H2000');
   });
 
+  // CTfile Formats (MDL molfile): three header lines, then the counts line ending in V2000/V3000.
   it.each([
     ['garbage', /counts line|fewer than 4 lines/],
     ['\n\n\nnot a counts line\n', /line 4 is not a V2000 or V3000 counts line/],
@@ -129,6 +134,7 @@ describe('stereo marks are kept faithfully', () => {
   });
 
   it('unspecified stereo gives no marks', () => {
+    // OpenSMILES: a centre or double bond without @/@@ or directional-bond marks has unspecified configuration.
     const { graph } = parseInput({ smiles: 'CC(Cl)C(Br)C=CC' });
     expect(graph.atoms.some((a) => a.tetrahedral)).toBe(false);
     expect(graph.bonds.some((b) => b.doubleBondStereo)).toBe(false);
