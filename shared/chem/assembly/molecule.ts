@@ -6,7 +6,7 @@ import { findPrincipalGroups, suffixIncludesCarbon } from '../groups/principal';
 import { locantText, type NamingContext, type Skeleton } from '../numbering/context';
 import { evaluate, type Evaluated } from '../numbering/evaluate';
 import { bestCandidates, firstByName } from '../numbering/select';
-import { isBenzene, isMancudeNonBenzene, ringNumberings } from '../rings/numberings';
+import { cycleBondOrders, isBenzene, isMancudeNonBenzene, ringNumberings } from '../rings/numberings';
 import { NamingRefusal } from './refusal';
 import type { NameStyle } from './style';
 import { parentPart, renderUnit } from './unit';
@@ -85,7 +85,7 @@ function parentCandidates(ctx: NamingContext): Skeleton[] {
     ctx.principal.filter((g) => g.anchors.some((a) => atoms.has(a)) || (suffixIncludesCarbon(g.kind) && graph.adjacency[g.anchors[0]].some((e) => atoms.has(e.atom)))).length;
   const ranked = rings.systems.map((system) => {
     const numberings = ringNumberings(graph, system.atoms, null);
-    const multiple = numberings[0].kind === 'benzene' ? system.atoms.length / 2 : evaluateMultipleBonds(ctx, numberings[0]);
+    const multiple = cycleBondOrders(graph, system.atoms).filter((order) => order > 1).length;
     return { numberings, size: system.atoms.length, multiple, groups: onRing(new Set(system.atoms)) };
   });
   const chains = chainTrees(ctx).flatMap((start) =>
@@ -135,16 +135,6 @@ function refuseMultiplicativeCases(survivors: Evaluated[]): void {
   const shared = first.principal.length > 0 && first.principal.every((p) => apart.principal.some((q) => q.group === p.group));
   const bare = first.principal.length === 0 && survivors.every((e) => e.prefixes.length === 1);
   if (!shared && !bare) throw new NamingRefusal('identical parents joined through a linking group: multiplicative names (P-15.3) are not built yet');
-}
-
-function evaluateMultipleBonds(ctx: NamingContext, skeleton: Skeleton): number {
-  const atoms = skeleton.atoms;
-  let count = 0;
-  for (let i = 0; i < atoms.length; i++) {
-    const edge = ctx.graph.adjacency[atoms[i]].find((e) => e.atom === atoms[(i + 1) % atoms.length])!;
-    if (ctx.graph.bonds[edge.bond].order > 1) count += 1;
-  }
-  return count;
 }
 
 /** A retained name (toluene, xylene…) covers its alkyl groups: they belong to the parent. */

@@ -1,5 +1,6 @@
 import type { Skeleton } from '../numbering/context';
 import type { MolGraph } from '../graph/types';
+import { bondBetween } from '../graph/rings';
 
 /** Every numbering of a monocycle: each start atom, both directions (or only from `start`). */
 export function ringNumberings(graph: MolGraph, cycle: number[], start: number | null): Skeleton[] {
@@ -19,27 +20,26 @@ export function ringNumberings(graph: MolGraph, cycle: number[], start: number |
   return result;
 }
 
+/** Bond orders around a monocycle given in ring order: atoms k and k+1, the last closing the ring. */
+export function cycleBondOrders(graph: MolGraph, cycle: number[]): number[] {
+  const orders = new Array<number>(cycle.length);
+  for (let k = 0; k < cycle.length; k++) orders[k] = graph.bonds[bondBetween(graph, cycle[k], cycle[(k + 1) % cycle.length])].order;
+  return orders;
+}
+
+function doubleBondCount(graph: MolGraph, cycle: number[]): number {
+  return cycleBondOrders(graph, cycle).filter((order) => order === 2).length;
+}
+
 /** A six-membered carbon ring with alternating double bonds (or aromatic bonds) is benzene. */
 export function isBenzene(graph: MolGraph, cycle: number[]): boolean {
   if (cycle.length !== 6 || cycle.some((a) => graph.atoms[a].element !== 'C')) return false;
-  let doubles = 0;
-  for (let k = 0; k < 6; k++) {
-    const a = cycle[k];
-    const b = cycle[(k + 1) % 6];
-    const edge = graph.adjacency[a].find((e) => e.atom === b)!;
-    if (graph.bonds[edge.bond].order === 2) doubles += 1;
-  }
-  return doubles === 3;
+  return doubleBondCount(graph, cycle) === 3;
 }
 
 /** Fully conjugated rings other than benzene ([n]annulenes) and aromatic flags off benzene are not named yet. */
 export function isMancudeNonBenzene(graph: MolGraph, cycle: number[]): boolean {
   if (isBenzene(graph, cycle)) return false;
   if (cycle.some((a) => graph.atoms[a].aromatic)) return true;
-  let doubles = 0;
-  for (let k = 0; k < cycle.length; k++) {
-    const edge = graph.adjacency[cycle[k]].find((e) => e.atom === cycle[(k + 1) % cycle.length])!;
-    if (graph.bonds[edge.bond].order === 2) doubles += 1;
-  }
-  return cycle.length % 2 === 0 && doubles === cycle.length / 2;
+  return cycle.length % 2 === 0 && doubleBondCount(graph, cycle) === cycle.length / 2;
 }
