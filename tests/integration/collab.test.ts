@@ -51,6 +51,7 @@ describe('collaboration websocket: editing together', () => {
     expect(c.root.toString()).toBe('first line; second line');
   });
 
+  // 21 CFR 11.10(g): authority checks, so only authorised people can alter a record.
   it("drops a reader's updates: never relayed, never stored", async () => {
     const pageId = await newPage('Reader tries to type');
     const editor = await join(chemist, pageId);
@@ -86,6 +87,7 @@ describe('collaboration websocket: editing together', () => {
     );
   });
 
+  // 21 CFR 11.10(e) and 11.70: a signed record does not change without trace (changes go to addenda).
   it('a locked page refuses updates from everyone and tells the clients', async () => {
     const pageId = await newPage('Locked for signing');
     const owner = await join(chemist, pageId);
@@ -121,6 +123,9 @@ describe('collaboration websocket: editing together', () => {
   });
 });
 
+// RFC 6455 §4.2.2: a server may refuse the opening handshake with an ordinary HTTP status; the
+// statuses are RFC 9110's (401 no session, 403 refused, 404 hidden as elsewhere in the API).
+// OWASP WebSocket Security Cheat Sheet: check the Origin header against cross-site WebSocket hijacking.
 describe('collaboration websocket: refusals', () => {
   it('refuses an upgrade without a session (401)', async () => {
     const pageId = await newPage('No session');
@@ -185,6 +190,7 @@ describe('collaboration persistence', () => {
     }
   });
 
+  // RULES.md: nothing acknowledged is ever lost; storing before relaying is common practice, no source.
   it('stores each accepted update before relaying it', async () => {
     const pageId = await newPage('Stored before relayed');
     const writer = await join(chemist, pageId);
