@@ -14,32 +14,40 @@ export function notebookRoutes(deps: AppDeps): Router {
   const { db } = deps;
   const router = Router();
 
-  async function summary(notebookId: string, access: Pick<NotebookAccess, 'membership'>) {
-    const [row] = await db
-      .select({ notebook: notebooks, pageCount: count(pages.id) })
-      .from(notebooks)
-      .leftJoin(pages, eq(pages.notebookId, notebooks.id))
-      .where(eq(notebooks.id, notebookId))
-      .groupBy(notebooks.id);
+  const withPageCount = { notebook: notebooks, pageCount: count(pages.id) };
+
+  function toSummary(row: { notebook: typeof notebooks.$inferSelect; pageCount: number }, membership: NotebookAccess['membership']) {
     return {
       id: row.notebook.id,
       title: row.notebook.title,
       description: row.notebook.description,
       createdAt: row.notebook.createdAt.toISOString(),
       pageCount: Number(row.pageCount),
-      myRole: access.membership,
+      myRole: membership,
     };
+  }
+
+  async function summary(notebookId: string, access: Pick<NotebookAccess, 'membership'>) {
+    const [row] = await db
+      .select(withPageCount)
+      .from(notebooks)
+      .leftJoin(pages, eq(pages.notebookId, notebooks.id))
+      .where(eq(notebooks.id, notebookId))
+      .groupBy(notebooks.id);
+    return toSummary(row, access.membership);
   }
 
   router.get('/notebooks', async (_req, res) => {
     const user = currentUser(res);
     const rows = await db
-      .select({ id: notebooks.id, membership: memberships.role })
+      .select({ ...withPageCount, membership: memberships.role })
       .from(notebooks)
       .leftJoin(memberships, and(eq(memberships.notebookId, notebooks.id), eq(memberships.userId, user.id)))
+      .leftJoin(pages, eq(pages.notebookId, notebooks.id))
       .where(user.role === 'admin' ? sql`true` : sql`${memberships.userId} is not null`)
+      .groupBy(notebooks.id, memberships.role)
       .orderBy(notebooks.createdAt);
-    res.json(await Promise.all(rows.map((r) => summary(r.id, { membership: r.membership ?? null }))));
+    res.json(rows.map((row) => toSummary(row, row.membership ?? null)));
   });
 
   router.post('/notebooks', requireRole('admin', 'supervisor', 'chemist'), async (req, res) => {
