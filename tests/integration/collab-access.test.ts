@@ -11,6 +11,9 @@ import { member, newPage } from '../support/signing';
 // role routes and sign-out ask the collaboration hub to re-check the people concerned, and every
 // connection's session is re-read periodically, so expiry is caught too. Close codes: 4401 the
 // session ended, 4403 no longer a member (server/collab/room.ts).
+// Sources: 21 CFR 11.10(d) and (g) (access limited to authorised people, checked by authority
+// checks); OWASP Session Management Cheat Sheet, session expiration and invalidation on logout
+// and password change (written from memory). 4401/4403 are private-use codes (RFC 6455 §7.4.2).
 
 let server: TestServer;
 let admin: ApiClient;
