@@ -159,7 +159,6 @@ export function PageEditor({ pageId, canEdit, me, embedRenderers = noRenderers, 
                   linkOpen={linkOpen}
                   setLinkOpen={setLinkOpen}
                   onAddStructure={openAdd}
-                  trailing={null}
                 />
               )}
               {accessChange.demoted && <DemotedNotice onDismiss={accessChange.dismiss} />}

@@ -40,7 +40,6 @@ export function EditorToolbar({
   linkOpen,
   setLinkOpen,
   onAddStructure,
-  trailing,
 }: {
   pageId: string;
   structures: StructureFields[];
@@ -48,7 +47,6 @@ export function EditorToolbar({
   linkOpen: boolean;
   setLinkOpen: (open: boolean) => void;
   onAddStructure: (start: 'text' | 'draw') => void;
-  trailing: ReactNode;
 }) {
   const [editor] = useLexicalComposerContext();
   const { block, formats, link } = useSelectionFormats();
@@ -97,7 +95,6 @@ export function EditorToolbar({
       <ToolButton label="Redo" onClick={() => editor.dispatchCommand(REDO_COMMAND, undefined)}>
         ↷
       </ToolButton>
-      <div className="ml-auto flex items-center gap-1">{trailing}</div>
     </div>
   );
 }
