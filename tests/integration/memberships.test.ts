@@ -7,6 +7,9 @@ import { newPage } from '../support/signing';
 // Role rules from DESIGN.md and API.md: an organisation viewer is read-only everywhere and can only
 // be a notebook reader; a reader of any organisation role cannot write. Every refused write is
 // checked against the database afterwards: nothing changed.
+// Outside sources: 21 CFR 11.10(g) (authority checks decide who may alter a record); OWASP
+// Authorization Cheat Sheet, "Enforce Least Privileges" and "Validate the Permissions on Every
+// Request" (a demotion takes effect at once, on existing sessions too).
 let server: TestServer;
 let owner: TestPerson;
 let ownerApi: ApiClient;
