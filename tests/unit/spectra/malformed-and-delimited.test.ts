@@ -13,6 +13,8 @@ describe('spectra that do not parse', () => {
     expect(result.parseError).toMatch(/character "z" is not allowed/);
   });
 
+  // McDonald & Wilks 1988 (written from memory): ##NPOINTS gives the number of points in the table,
+  // a file begins with ##TITLE= and its data table follows a label such as ##XYDATA=.
   it('reports a file cut short (fewer points than ##NPOINTS declares)', () => {
     const result = readSpectrum(`${header(10)}\n1 5 6 7\n##END=\n`, 'jcamp-dx');
     expect(result.parseError).toMatch(/##NPOINTS says 10 points but the data hold 3/);
@@ -28,6 +30,8 @@ describe('spectra that do not parse', () => {
   });
 });
 
+// Comma-separated fields per RFC 4180; a two-column x,y table with an optional header naming the
+// axes and units in brackets is common practice for exported spectra, no source.
 describe('two-column CSV and TSV spectra', () => {
   it('reads a CSV with a header naming axes and units in brackets', () => {
     const csv = 'Wavenumber (cm-1),Transmittance (%)\n4000,98.5\n3000,97.0\n1740,12.5\n1000,80\n';
