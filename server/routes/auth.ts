@@ -1,11 +1,6 @@
 import { and, eq, gt, isNull } from 'drizzle-orm';
 import { Router } from 'express';
-import {
-  passwordResetRequestSchema,
-  setPasswordSchema,
-  signInSchema,
-} from '../../shared/schemas/auth';
-import { newPasswordSchema } from '../../shared/schemas/auth';
+import { passwordResetRequestSchema, setPasswordSchema, signInSchema } from '../../shared/schemas/auth';
 import { recordAuditEvent } from '../audit/record';
 import { currentUser } from '../auth/middleware';
 import { hashPassword, verifyPassword } from '../auth/passwords';
@@ -16,7 +11,6 @@ import { getCollabHub } from '../collab';
 import type { AppDeps } from '../context';
 import { invitations, passwordResets, users } from '../db/schema';
 import { HttpError, notFound, parseInput } from '../http/errors';
-import { z } from 'zod';
 
 const RESET_LIFETIME_MS = 60 * 60 * 1000;
 
@@ -35,10 +29,10 @@ export function authRoutes(deps: AppDeps): Router {
   });
 
   router.post('/auth/sign-out', async (_req, res) => {
+    const user = currentUser(res);
     const session = res.locals.session;
-    currentUser(res);
     if (session) await deps.auth.invalidateSession(session.id);
-    await getCollabHub(deps).refreshAccess({ userId: currentUser(res).id });
+    await getCollabHub(deps).refreshAccess({ userId: user.id });
     res.append('Set-Cookie', deps.auth.createBlankSessionCookie().serialize());
     res.status(204).end();
   });
@@ -104,7 +98,7 @@ export function authRoutes(deps: AppDeps): Router {
   });
 
   router.post('/auth/password-reset/confirm', async (req, res) => {
-    const input = parseInput(z.object({ token: z.string().min(20).max(200), password: newPasswordSchema }), req.body);
+    const input = parseInput(setPasswordSchema.omit({ name: true }), req.body);
     const passwordHash = await hashPassword(input.password);
     const user = await db.transaction(async (tx) => {
       const [reset] = await tx
