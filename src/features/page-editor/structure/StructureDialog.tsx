@@ -4,13 +4,8 @@ import { FormAlert } from '../../../components/FormAlert';
 import type { StructureDialogRequest } from '../EditorEnvironment';
 import { DrawingPad } from './DrawingPad';
 import { prepareStructure } from './prepareStructure';
+import type { StructureContent } from './structureEdits';
 import { classifyStructureText, STRUCTURE_FILE_TYPES, structureFromFile, StructureTextProblem } from './structureText';
-
-export interface StructureDialogResult {
-  molfile: string;
-  smiles: string;
-  label: string;
-}
 
 type Way = 'text' | 'draw';
 
@@ -28,7 +23,7 @@ export function StructureDialog({
 }: {
   request: StructureDialogRequest;
   onClose: () => void;
-  onDone: (result: StructureDialogResult) => void;
+  onDone: (result: StructureContent) => void;
 }) {
   const titleId = useId();
   const textId = useId();
