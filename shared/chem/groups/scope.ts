@@ -84,8 +84,6 @@ function nitroGroup(graph: MolGraph, n: number): PrefixGroup | null {
   return { kind: 'nitro', atom: n, atoms: [n, ...oxygens.map((e) => e.atom)] };
 }
 
-const HALIDE = new Set(['F', 'Cl', 'Br', 'I']);
-
 /**
  * A carbonyl carbon whose remaining neighbour, if any, is carbon, with one more group: OH (carboxy),
  * O-C (ester, the O and its carbon not being part of an anhydride), N with only carbons and
@@ -109,7 +107,7 @@ function acylGroup(graph: MolGraph, c: number): PrefixGroup | null {
   }
   const nitrogenOk = others.every((e) => graph.atoms[e.atom].element === 'C' && graph.bonds[e.bond].order === 1 && !isCarbonyl(graph, e.atom));
   if (atom.element === 'N' && nitrogenOk && others.length + atom.hydrogens === 2) return { kind: 'carbamoyl', atom: c, atoms };
-  if (HALIDE.has(atom.element) && others.length === 0) return { kind: 'acylHalide', atom: c, atoms };
+  if (HALO[atom.element] && others.length === 0) return { kind: 'acylHalide', atom: c, atoms };
   return null;
 }
 
@@ -174,7 +172,7 @@ function carbonylRefusal(graph: MolGraph, c: number, where: string): string {
   if (graph.adjacency[c].some((e) => graph.atoms[e.atom].charge !== 0)) return `${where} belongs to a charged group (e.g. a carboxylate): ions are not named yet`;
   const carbonylOxygens = graph.adjacency[c].filter((e) => graph.atoms[e.atom].element === 'O').length;
   if (elements.has('N')) return `${where} belongs to an amide or other C(=O)-N group, which is not named yet`;
-  if (['F', 'Cl', 'Br', 'I'].some((x) => elements.has(x))) return `${where} belongs to an acid halide, which is not named yet`;
+  if ([...elements].some((x) => HALO[x])) return `${where} belongs to an acid halide, which is not named yet`;
   if (carbonylOxygens >= 2) return `${where} belongs to a carboxylic acid, ester, anhydride or carbonate, which is not named yet`;
   return `${where} belongs to a carbonyl group with a heteroatom on its carbon, which is not named yet`;
 }
