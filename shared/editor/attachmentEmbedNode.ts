@@ -43,12 +43,6 @@ export class AttachmentEmbedNode extends BlockNode<AttachmentEmbedFields> {
     return { attachmentId: self.__attachmentId, linkedStructureKey: self.__linkedStructureKey };
   }
 
-  setLinkedStructureKey(structureKey: string | null): this {
-    const writable = this.getWritable();
-    writable.__linkedStructureKey = structureKey;
-    return writable;
-  }
-
   updateFromJSON(json: LexicalParseJSON<SerializedAttachmentEmbedNode>): this {
     const writable = super.updateFromJSON(json).getWritable();
     writable.__attachmentId = textOf(json.attachmentId);
@@ -59,8 +53,4 @@ export class AttachmentEmbedNode extends BlockNode<AttachmentEmbedFields> {
   getTextContent(): string {
     return `[attachment ${this.fields().attachmentId}]\n`;
   }
-}
-
-export function $isAttachmentEmbedNode(node: unknown): node is AttachmentEmbedNode {
-  return node instanceof AttachmentEmbedNode;
 }
