@@ -12,6 +12,9 @@ export interface SigningHub {
   takeSnapshot(pageId: string, reason: string): Promise<string>;
 }
 
+/** A file as a signature covers it. */
+const recordAttachmentColumns = { id: attachments.id, name: attachments.displayName, sha256: attachments.sha256, size: attachments.size };
+
 function pageIdentity(page: PageRow): PageRecordContent['page'] {
   return { id: page.id, notebookId: page.notebookId, number: page.number, title: page.title };
 }
@@ -22,7 +25,7 @@ function pageIdentity(page: PageRow): PageRecordContent['page'] {
  */
 async function originalAttachments(db: Reader, pageId: string): Promise<RecordAttachment[]> {
   return db
-    .select({ id: attachments.id, name: attachments.displayName, sha256: attachments.sha256, size: attachments.size })
+    .select(recordAttachmentColumns)
     .from(attachments)
     .where(and(eq(attachments.pageId, pageId), eq(attachments.addendum, false)));
 }
@@ -58,7 +61,7 @@ export async function storedPageContent(db: Reader, page: PageRow): Promise<Page
 export async function addendumContent(db: Reader, addendum: AddendumRow): Promise<AddendumRecordContent> {
   const files = addendum.attachmentIds.length
     ? await db
-        .select({ id: attachments.id, name: attachments.displayName, sha256: attachments.sha256, size: attachments.size })
+        .select(recordAttachmentColumns)
         .from(attachments)
         .where(and(eq(attachments.pageId, addendum.pageId), inArray(attachments.id, addendum.attachmentIds)))
     : [];
