@@ -57,3 +57,7 @@ export async function pageAccess(db: Database, user: User, pageId: string): Prom
 export function assertCanWrite(access: NotebookAccess): void {
   if (!access.canWrite) throw forbidden('You can read this notebook but not change it');
 }
+
+export function assertCanManage(access: NotebookAccess): void {
+  if (!access.canManage) throw forbidden('Only the notebook owner or an admin can change its members');
+}

@@ -1,7 +1,7 @@
 import type { NextFunction, Request, RequestHandler, Response } from 'express';
 import type { Session, User } from 'lucia';
 import type { Role } from '../../shared/schemas/common';
-import { HttpError, notSignedIn } from '../http/errors';
+import { forbidden, notSignedIn } from '../http/errors';
 import type { Auth } from './lucia';
 
 declare global {
@@ -44,7 +44,7 @@ export const requireUser: RequestHandler = (_req: Request, res: Response, next: 
 export function requireRole(...allowed: Role[]): RequestHandler {
   return (_req, res, next) => {
     const user = currentUser(res);
-    if (!allowed.includes(user.role)) throw new HttpError(403, 'forbidden', `This needs one of the roles: ${allowed.join(', ')}`);
+    if (!allowed.includes(user.role)) throw forbidden(`This needs one of the roles: ${allowed.join(', ')}`);
     next();
   };
 }

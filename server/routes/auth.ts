@@ -10,7 +10,7 @@ import { hashToken, newToken } from '../auth/tokens';
 import { getCollabHub } from '../collab';
 import type { AppDeps } from '../context';
 import { invitations, passwordResets, users } from '../db/schema';
-import { HttpError, notFound, parseInput } from '../http/errors';
+import { conflict, HttpError, notFound, parseInput } from '../http/errors';
 
 const RESET_LIFETIME_MS = 60 * 60 * 1000;
 
@@ -68,7 +68,7 @@ export function authRoutes(deps: AppDeps): Router {
         .returning();
       if (claimed.length === 0) throw notFound('This invitation (it may have been used already or expired)');
       const [existing] = await tx.select().from(users).where(eq(users.email, invitation.email));
-      if (existing) throw new HttpError(409, 'account_exists', 'An account with this e-mail already exists; use password reset instead');
+      if (existing) throw conflict('account_exists', 'An account with this e-mail already exists; use password reset instead');
       const [created] = await tx
         .insert(users)
         .values({ email: invitation.email, name: input.name ?? invitation.name, role: invitation.role, passwordHash })

@@ -2,12 +2,12 @@ import { and, count, eq, sql } from 'drizzle-orm';
 import { Router } from 'express';
 import { membershipUpsertSchema, notebookCreateSchema } from '../../shared/schemas/notebooks';
 import { recordAuditEvent } from '../audit/record';
-import { notebookAccess, type NotebookAccess } from '../auth/access';
+import { assertCanManage, notebookAccess, type NotebookAccess } from '../auth/access';
 import { currentUser, requireRole } from '../auth/middleware';
 import { getCollabHub } from '../collab';
 import type { AppDeps } from '../context';
 import { memberships, notebooks, pages, users } from '../db/schema';
-import { forbidden, HttpError, notFound, parseInput } from '../http/errors';
+import { HttpError, notFound, parseInput } from '../http/errors';
 import { idParam } from '../http/params';
 
 export function notebookRoutes(deps: AppDeps): Router {
@@ -81,7 +81,7 @@ export function notebookRoutes(deps: AppDeps): Router {
   router.put('/notebooks/:id/members', async (req, res) => {
     const actor = currentUser(res);
     const access = await notebookAccess(db, actor, idParam(req, 'id', 'Notebook'));
-    if (!access.canManage) throw forbidden('Only the notebook owner or an admin can change its members');
+    assertCanManage(access);
     const input = parseInput(membershipUpsertSchema, req.body);
     const [member] = await db.select().from(users).where(eq(users.id, input.userId));
     if (!member) throw notFound('Person');
@@ -109,7 +109,7 @@ export function notebookRoutes(deps: AppDeps): Router {
   router.delete('/notebooks/:id/members/:userId', async (req, res) => {
     const actor = currentUser(res);
     const access = await notebookAccess(db, actor, idParam(req, 'id', 'Notebook'));
-    if (!access.canManage) throw forbidden('Only the notebook owner or an admin can change its members');
+    assertCanManage(access);
     const userId = idParam(req, 'userId', 'Member');
     const removed = await db
       .delete(memberships)

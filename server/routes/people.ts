@@ -7,7 +7,7 @@ import { newToken } from '../auth/tokens';
 import { getCollabHub } from '../collab';
 import type { AppDeps } from '../context';
 import { caughtMail, invitations, memberships, users } from '../db/schema';
-import { HttpError, notFound, parseInput } from '../http/errors';
+import { conflict, notFound, parseInput } from '../http/errors';
 import { idParam } from '../http/params';
 
 const INVITATION_LIFETIME_MS = 7 * 24 * 60 * 60 * 1000;
@@ -52,7 +52,7 @@ export function peopleRoutes(deps: AppDeps): Router {
     const { role } = parseInput(userRoleUpdateSchema, req.body);
     const admin = currentUser(res);
     if (id === admin.id && role !== 'admin') {
-      throw new HttpError(409, 'last_admin_guard', 'You cannot remove your own admin role; ask another admin');
+      throw conflict('last_admin_guard', 'You cannot remove your own admin role; ask another admin');
     }
     const [before] = await db.select().from(users).where(eq(users.id, id));
     if (!before) throw notFound('Person');
@@ -87,7 +87,7 @@ export function peopleRoutes(deps: AppDeps): Router {
     const input = parseInput(invitationCreateSchema, req.body);
     const admin = currentUser(res);
     const [existing] = await db.select({ id: users.id }).from(users).where(eq(users.email, input.email));
-    if (existing) throw new HttpError(409, 'account_exists', 'This person already has an account');
+    if (existing) throw conflict('account_exists', 'This person already has an account');
     const { token, tokenHash } = newToken();
     const [invitation] = await db
       .insert(invitations)
