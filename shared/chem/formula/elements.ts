@@ -38,3 +38,11 @@ export const NUCLIDE_MASS: Readonly<Record<string, Readonly<Record<number, numbe
 };
 
 export const MOST_ABUNDANT: Readonly<Record<string, number>> = { H: 1, B: 11, C: 12, N: 14, O: 16, F: 19, P: 31, S: 32, Cl: 35, Br: 79, I: 127 };
+
+/** Element symbols in order of atomic number (IUPAC periodic table, elements 1-118). */
+export const ELEMENT_SYMBOLS: readonly string[] = (
+  'H He Li Be B C N O F Ne Na Mg Al Si P S Cl Ar K Ca Sc Ti V Cr Mn Fe Co Ni Cu Zn Ga Ge As Se Br Kr ' +
+  'Rb Sr Y Zr Nb Mo Tc Ru Rh Pd Ag Cd In Sn Sb Te I Xe Cs Ba La Ce Pr Nd Pm Sm Eu Gd Tb Dy Ho Er Tm Yb ' +
+  'Lu Hf Ta W Re Os Ir Pt Au Hg Tl Pb Bi Po At Rn Fr Ra Ac Th Pa U Np Pu Am Cm Bk Cf Es Fm Md No Lr Rf ' +
+  'Db Sg Bh Hs Mt Ds Rg Cn Nh Fl Mc Lv Ts Og'
+).split(' ');

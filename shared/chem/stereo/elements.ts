@@ -1,11 +1,8 @@
-import { ATOMIC_WEIGHT, MOST_ABUNDANT } from '../formula/elements';
+import { ATOMIC_WEIGHT, ELEMENT_SYMBOLS, MOST_ABUNDANT } from '../formula/elements';
 import { StereoRefusal } from './refusal';
 
 // Atomic numbers (CIP Rule 1a, IUPAC 2013 P-92.1.4.1).
-const SYMBOLS =
-  'H He Li Be B C N O F Ne Na Mg Al Si P S Cl Ar K Ca Sc Ti V Cr Mn Fe Co Ni Cu Zn Ga Ge As Se Br Kr ' +
-  'Rb Sr Y Zr Nb Mo Tc Ru Rh Pd Ag Cd In Sn Sb Te I Xe';
-const ATOMIC_NUMBER = new Map(SYMBOLS.split(' ').map((symbol, i) => [symbol, i + 1]));
+const ATOMIC_NUMBER = new Map(ELEMENT_SYMBOLS.map((symbol, i) => [symbol, i + 1]));
 
 export function atomicNumber(symbol: string): number {
   const z = ATOMIC_NUMBER.get(symbol);
