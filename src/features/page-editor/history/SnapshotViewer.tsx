@@ -7,8 +7,9 @@ import { ListPlugin } from '@lexical/react/LexicalListPlugin';
 import { RichTextPlugin } from '@lexical/react/LexicalRichTextPlugin';
 import { TablePlugin } from '@lexical/react/LexicalTablePlugin';
 import type { Provider } from '@lexical/yjs';
-import { useCallback, useEffect, useId } from 'react';
+import { useCallback, useId } from 'react';
 import * as Y from 'yjs';
+import { ModalOverlay } from '../../../components/ModalOverlay';
 import { formatDateTime } from '../../../lib/format';
 import { useSnapshot, type SnapshotState } from '../api/queries';
 import { EditorEnvironmentContext, type EditorEnvironment } from '../EditorEnvironment';
@@ -49,32 +50,24 @@ export function SnapshotViewer({ pageId, snapshotId, environment, onClose }: { p
   const titleId = useId();
   const snapshot = useSnapshot(pageId, snapshotId);
 
-  useEffect(() => {
-    const onKey = (event: KeyboardEvent) => event.key === 'Escape' && onClose();
-    window.addEventListener('keydown', onKey);
-    return () => window.removeEventListener('keydown', onKey);
-  }, [onClose]);
-
   return (
-    <div className="fixed inset-0 z-50 grid place-items-center bg-ink/30 p-4" onMouseDown={(event) => event.target === event.currentTarget && onClose()}>
-      <div role="dialog" aria-modal="true" aria-labelledby={titleId} className="flex max-h-[90vh] w-full max-w-4xl flex-col rounded-lg border border-fold bg-paper-card shadow-sheet">
-        <header className="flex items-start justify-between gap-3 border-b border-fold px-5 py-3.5">
-          <div>
-            <h2 id={titleId} className="text-base font-semibold text-ink">
-              Earlier version{snapshot.data && ` · ${formatDateTime(snapshot.data.takenAt)}`}
-            </h2>
-            <p className="mt-0.5 text-sm text-ink-soft">Read only. The page itself is not changed by looking back.</p>
-          </div>
-          <button type="button" onClick={onClose} className="rounded px-2 py-1 text-sm text-tide-700 hover:bg-tide-50">
-            Close
-          </button>
-        </header>
-        <div className="ruled overflow-auto px-6 py-4">
-          {snapshot.isPending && <p className="text-sm text-ink-soft">Opening the version…</p>}
-          {snapshot.isError && <p className="text-sm text-ember-700">{snapshot.error.message}</p>}
-          {snapshot.data && <SnapshotBody snapshot={snapshot.data} environment={environment} />}
+    <ModalOverlay labelledBy={titleId} onClose={onClose} className="flex max-h-[90vh] w-full max-w-4xl flex-col rounded-lg border border-fold bg-paper-card shadow-sheet">
+      <header className="flex items-start justify-between gap-3 border-b border-fold px-5 py-3.5">
+        <div>
+          <h2 id={titleId} className="text-base font-semibold text-ink">
+            Earlier version{snapshot.data && ` · ${formatDateTime(snapshot.data.takenAt)}`}
+          </h2>
+          <p className="mt-0.5 text-sm text-ink-soft">Read only. The page itself is not changed by looking back.</p>
         </div>
+        <button type="button" onClick={onClose} className="rounded px-2 py-1 text-sm text-tide-700 hover:bg-tide-50">
+          Close
+        </button>
+      </header>
+      <div className="ruled overflow-auto px-6 py-4">
+        {snapshot.isPending && <p className="text-sm text-ink-soft">Opening the version…</p>}
+        {snapshot.isError && <p className="text-sm text-ember-700">{snapshot.error.message}</p>}
+        {snapshot.data && <SnapshotBody snapshot={snapshot.data} environment={environment} />}
       </div>
-    </div>
+    </ModalOverlay>
   );
 }
