@@ -32,10 +32,7 @@ export class CollabHub {
 
   /** Stores what is pending and returns the page's up-to-date projection (text, JSON, structures). */
   currentContent(pageId: string): Promise<PageContent> {
-    return this.withRoom(pageId, async (room) => {
-      const { text, json, structures } = await room.currentContent();
-      return { text, json, structures };
-    });
+    return this.withRoom(pageId, (room) => room.currentContent());
   }
 
   /** Records a history snapshot of the page as it is now; returns the snapshot id. */
