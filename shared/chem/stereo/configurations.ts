@@ -5,7 +5,7 @@ import { StereoRefusal } from './refusal';
 
 /** A stereogenic unit as marked in the input: a tetrahedral centre or a double bond. */
 export type StereoUnit =
-  | { kind: 'tetrahedral'; atom: number; mark: NonNullable<Atom['tetrahedral']> }
+  | { kind: 'tetrahedral'; atom: number; mark: NonNullable<Atom['tetrahedral']>; inRing: boolean }
   | { kind: 'doubleBond'; bond: Bond; mark: NonNullable<Bond['doubleBondStereo']> };
 
 export const focusAtoms = (unit: StereoUnit): number[] =>
@@ -26,7 +26,6 @@ function permutationIsOdd(from: number[], to: number[]): boolean {
  * highest → second → third path is anticlockwise from the viewing side of P-92.1.1, i.e. S.
  */
 export function labelTetrahedral(
-  graph: MolGraph,
   dg: Digraph,
   ranker: Ranker,
   node: Node,
@@ -40,7 +39,7 @@ export function labelTetrahedral(
     const tiedHoldStereo = groups.some((g) => g.length > 1 && g.some((e) => holdsStereo(dg, e.to)));
     // With two pairs of tied branches (or a fully symmetric set), the 2013 rules need further
     // reference-based comparison (later "Rule 6"); those centres may still be stereogenic.
-    if (groups.length <= 2 && (tiedHoldStereo || inRing(graph, unit.atom))) {
+    if (groups.length <= 2 && (tiedHoldStereo || unit.inRing)) {
       throw new StereoRefusal(`centre at atom ${unit.atom + 1} has two pairs of equivalent ligands; not handled`);
     }
     return 'none';
@@ -62,10 +61,6 @@ function holdsStereo(dg: Digraph, start: Node): boolean {
     queue.push(...dg.out(queue[i]));
   }
   return false;
-}
-
-function inRing(graph: MolGraph, atom: number): boolean {
-  return graph.adjacency[atom].some(({ bond }) => bondInRing(graph, bond, Infinity));
 }
 
 /** True when the bond lies in a ring of at most `maxSize` atoms. */

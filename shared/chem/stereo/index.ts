@@ -7,6 +7,7 @@
  * be named with partial stereodescriptors.
  */
 import type { MolGraph } from '../graph/types';
+import { findRingSystems, type RingSystems } from '../graph/rings';
 import { bondInRing, focusAtoms, labelDoubleBond, labelTetrahedral, type StereoUnit } from './configurations';
 import { Digraph, type Descriptor, type Node } from './digraph';
 import { ALL_RULES, CONSTITUTIONAL, Ranker } from './rules';
@@ -28,10 +29,10 @@ export function assignStereo(graph: MolGraph): StereoAssignment {
   }
 }
 
-function findUnits(graph: MolGraph): StereoUnit[] {
+function findUnits(graph: MolGraph, rings: RingSystems): StereoUnit[] {
   const units: StereoUnit[] = [];
   for (const atom of graph.atoms) {
-    if (atom.tetrahedral) units.push({ kind: 'tetrahedral', atom: atom.index, mark: atom.tetrahedral });
+    if (atom.tetrahedral) units.push({ kind: 'tetrahedral', atom: atom.index, mark: atom.tetrahedral, inRing: rings.systemOf[atom.index] >= 0 });
   }
   for (const bond of graph.bonds) {
     // A double bond in a ring of fewer than eight atoms can only be cis: no descriptor (common
@@ -46,10 +47,11 @@ function findUnits(graph: MolGraph): StereoUnit[] {
 function assign(graph: MolGraph): StereoAssignment {
   // The parser notes stereo it could not carry into the graph (axial marks, odd centres).
   if (graph.stereoNotes?.length) throw new StereoRefusal(`stereo feature not handled: ${graph.stereoNotes[0]}`);
-  const units = findUnits(graph);
+  const rings = findRingSystems(graph);
+  const units = findUnits(graph, rings);
   const result: StereoAssignment = { centres: [], doubleBonds: [] };
   if (units.length === 0) return result;
-  checkSupported(graph, units);
+  checkSupported(graph, rings, units);
   for (const unit of units) {
     if (unit.kind === 'tetrahedral') {
       const label = labelUnit(graph, units, unit, unit.atom);
@@ -70,20 +72,20 @@ function assign(graph: MolGraph): StereoAssignment {
   return result;
 }
 
-function labelOnce(graph: MolGraph, dg: Digraph, ranker: Ranker, unit: StereoUnit, node: Node): Descriptor {
-  return unit.kind === 'tetrahedral' ? labelTetrahedral(graph, dg, ranker, node, unit) : labelDoubleBond(dg, ranker, node, unit);
+function labelOnce(dg: Digraph, ranker: Ranker, unit: StereoUnit, node: Node): Descriptor {
+  return unit.kind === 'tetrahedral' ? labelTetrahedral(dg, ranker, node, unit) : labelDoubleBond(dg, ranker, node, unit);
 }
 
 /** Labels one unit: constitutional rules first; if they leave ties, auxiliary descriptors and Rules 3–5. */
 function labelUnit(graph: MolGraph, units: StereoUnit[], unit: StereoUnit, rootAtom: number): Descriptor {
   const dg = new Digraph(graph, rootAtom);
-  const first = labelOnce(graph, dg, new Ranker(dg, CONSTITUTIONAL), unit, dg.origin);
+  const first = labelOnce(dg, new Ranker(dg, CONSTITUTIONAL), unit, dg.origin);
   if (first !== 'none') return first;
   if (units.length === 1) return 'none';
   const all = new Ranker(dg, ALL_RULES);
-  assignAuxiliary(graph, dg, all, units, unit);
+  assignAuxiliary(dg, all, units, unit);
   dg.setRoot(dg.origin);
-  return labelOnce(graph, dg, all, unit, dg.origin);
+  return labelOnce(dg, all, unit, dg.origin);
 }
 
 /**
@@ -91,7 +93,7 @@ function labelUnit(graph: MolGraph, units: StereoUnit[], unit: StereoUnit, rootA
  * descriptor from its own branches, farthest from the root first; descriptors of one sphere are
  * published together so nodes of a sphere never see each other's.
  */
-function assignAuxiliary(graph: MolGraph, dg: Digraph, ranker: Ranker, units: StereoUnit[], centre: StereoUnit): void {
+function assignAuxiliary(dg: Digraph, ranker: Ranker, units: StereoUnit[], centre: StereoUnit): void {
   const pending: { node: Node; unit: StereoUnit }[] = [];
   const nodes = dg.all();
   for (const unit of units) {
@@ -116,7 +118,7 @@ function assignAuxiliary(graph: MolGraph, dg: Digraph, ranker: Ranker, units: St
       batch = new Map();
       sphere = node.dist;
     }
-    batch.set(node, labelOnce(graph, dg, ranker, unit, node));
+    batch.set(node, labelOnce(dg, ranker, unit, node));
   }
   dg.setAux(batch);
 }

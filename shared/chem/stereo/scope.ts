@@ -1,6 +1,6 @@
 import type { MolGraph } from '../graph/types';
+import type { RingSystems } from '../graph/rings';
 import type { StereoUnit } from './configurations';
-import { bondInRing } from './configurations';
 import { StereoRefusal } from './refusal';
 
 /**
@@ -10,9 +10,11 @@ import { StereoRefusal } from './refusal';
  * - tetrahedral marks on atoms without four ligands (allenes' axial marks, sulfoxides, phosphines);
  * - double bonds that are part of a cumulene (axial chirality, P-93.5.7).
  */
-export function checkSupported(graph: MolGraph, units: StereoUnit[]): void {
+export function checkSupported(graph: MolGraph, rings: RingSystems, units: StereoUnit[]): void {
   for (const bond of graph.bonds) {
-    if (!bondInRing(graph, bond.index, Infinity)) continue;
+    // Ring systems are the connected pieces of ring bonds, so a bond is in a ring when both ends share one.
+    const system = rings.systemOf[bond.from];
+    if (system < 0 || system !== rings.systemOf[bond.to]) continue;
     for (const end of [bond.from, bond.to]) {
       const atom = graph.atoms[end];
       if (atom.charge !== 0) throw new StereoRefusal('charged ring atoms (mancude ring duplicates) are not handled');
