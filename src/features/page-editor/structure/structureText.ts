@@ -2,6 +2,8 @@
  * Telling what a chemist pasted or dropped apart, before any chemistry runs: one SMILES string or
  * one MDL molfile (V2000/V3000; the first record of an SD file). Pure, so it is unit-tested.
  */
+import { MAX_STRUCTURE_TEXT } from '../../../../shared/schemas/chem';
+
 export type StructureText = { smiles: string } | { molfile: string };
 
 export class StructureTextProblem extends Error {
@@ -13,9 +15,6 @@ export class StructureTextProblem extends Error {
 
 const MOLFILE_END = /^M {2}END\s*$/m;
 const CTAB_VERSION = /\b(V2000|V3000)\b/;
-
-/** The largest text we accept for one structure; larger pastes are almost always a whole file of them. */
-export const MAX_STRUCTURE_TEXT = 200_000;
 
 export function looksLikeMolfile(text: string): boolean {
   return CTAB_VERSION.test(text) || MOLFILE_END.test(text);
