@@ -1,4 +1,5 @@
 import { z } from 'zod';
+import type { MembershipRole } from './common';
 
 export const pageStatuses = ['draft', 'signed', 'witnessed'] as const;
 export type PageStatus = (typeof pageStatuses)[number];
@@ -26,5 +27,5 @@ export interface PageSummary {
 export interface PageDetail extends PageSummary {
   notebookTitle: string;
   /** What the caller may do here, decided on the server. */
-  access: { canEdit: boolean; role: 'owner' | 'editor' | 'reader' };
+  access: { canEdit: boolean; role: MembershipRole };
 }
