@@ -15,7 +15,7 @@ import { SpectrumEmbed, SpectrumThumbnail, SpectrumView } from '../features/spec
 import { formatPageNumber } from '../lib/format';
 import { useSignedInPerson } from './AppLayout';
 
-// The editor (Lexical, Yjs) loads only when a page is opened.
+// Our editor code loads only when a page is opened (the Lexical and Yjs libraries sit in the shared vendor chunk).
 const PageEditor = lazy(() => import('../features/page-editor').then((module) => ({ default: module.PageEditor })));
 
 // Spectra are drawn by their own feature, both inside the text and in the page's file list.
