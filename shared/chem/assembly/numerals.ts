@@ -8,7 +8,7 @@ const TENS = ['', 'deca', 'icosa', 'triaconta', 'tetraconta', 'pentaconta', 'hex
 const HUNDREDS = ['', 'hecta', 'dicta', 'tricta', 'tetracta', 'pentacta', 'hexacta', 'heptacta', 'octacta', 'nonacta'];
 const THOUSANDS = ['', 'kilia', 'dilia', 'trilia', 'tetralia', 'pentalia', 'hexalia', 'heptalia', 'octalia', 'nonalia'];
 
-/** Numerical term for n ≥ 11 as used inside hydrocarbon names (ends in 'a'). */
+/** Numerical term for n ≥ 10 as used inside hydrocarbon names (ends in 'a'). */
 function compositeTerm(n: number): string {
   const unit = n % 10;
   const ten = Math.floor(n / 10) % 10;
@@ -23,21 +23,21 @@ function compositeTerm(n: number): string {
   return unitText + tenText + HUNDREDS[hundred] + THOUSANDS[thousand];
 }
 
+/** Retained stems of the first four hydrocarbons (P-21.2.1); from pent on the stem is the numerical term. */
+const RETAINED_STEMS = ['', 'meth', 'eth', 'prop', 'but'];
+
 /** Stem of the saturated unbranched hydrocarbon with n carbons: meth, eth, … undec, henicos. */
 export function alkaneStem(n: number): string {
   if (n < 1 || n > 9999) throw new RangeError(`no stem for ${n}`);
-  const small = ['', 'meth', 'eth', 'prop', 'but', 'pent', 'hex', 'hept', 'oct', 'non', 'dec'];
-  if (n <= 10) return small[n];
-  return compositeTerm(n).slice(0, -1);
+  if (n <= 4) return RETAINED_STEMS[n];
+  return (n < 10 ? UNITS[n] : compositeTerm(n)).slice(0, -1);
 }
 
 /** Basic multiplying prefix (P-14.2.1): di, tri, tetra, … for simple substituents. */
 export function multiplier(n: number): string {
   if (n === 1) return '';
   if (n === 2) return 'di';
-  if (n === 3) return 'tri';
-  if (n <= 10) return ['tetra', 'penta', 'hexa', 'hepta', 'octa', 'nona', 'deca'][n - 4];
-  if (n === 11) return 'undeca';
+  if (n < 10) return UNITS[n];
   return compositeTerm(n);
 }
 
