@@ -1,5 +1,5 @@
 import type { MolGraph } from '../graph/types';
-import type { PrefixGroup } from './scope';
+import { isCarbonyl, type PrefixGroup } from './scope';
 
 /** Characteristic groups the engine can express as a suffix, in descending seniority (P-41). */
 export type SuffixKind = 'acid' | 'ester' | 'acylHalide' | 'amide' | 'nitrile' | 'al' | 'one' | 'ol' | 'amine';
@@ -33,7 +33,7 @@ export interface PrincipalGroup {
 /** An oxo group on a carbon with at most one carbon neighbour is an aldehyde (or formaldehyde). */
 export function isAldehydeCarbon(graph: MolGraph, c: number): boolean {
   const carbons = graph.adjacency[c].filter((e) => graph.atoms[e.atom].element === 'C').length;
-  return carbons <= 1 && graph.atoms[c].hydrogens >= 1 && graph.adjacency[c].some((e) => graph.atoms[e.atom].element === 'O' && graph.bonds[e.bond].order === 2);
+  return carbons <= 1 && graph.atoms[c].hydrogens >= 1 && isCarbonyl(graph, c);
 }
 
 /**
