@@ -7,7 +7,7 @@
  */
 const lettersCache = new Map<string, string>();
 
-export function alphaLetters(name: string): string {
+function alphaLetters(name: string): string {
   let letters = lettersCache.get(name);
   if (letters === undefined) {
     letters = name.replace(/\b(sec|tert)-/g, '').replace(/[^a-z]/g, '');

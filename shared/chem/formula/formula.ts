@@ -3,7 +3,7 @@ import { ChemInputError } from '../parsing/errors';
 import { ATOMIC_WEIGHT, MOST_ABUNDANT, NUCLIDE_MASS } from './elements';
 
 /** Element counts, hydrogens included (isotope labels counted under their element). */
-export function elementCounts(graph: MolGraph): Map<string, number> {
+function elementCounts(graph: MolGraph): Map<string, number> {
   const counts = new Map<string, number>();
   for (const atom of graph.atoms) {
     counts.set(atom.element, (counts.get(atom.element) ?? 0) + 1);
