@@ -51,8 +51,9 @@ export async function appendInTransaction(tx: Executor, input: AuditEventInput):
   await tx.execute(sql`select pg_advisory_xact_lock(7300001)`);
   const [last] = await tx.select({ hash: auditEvents.hash }).from(auditEvents).orderBy(desc(auditEvents.id)).limit(1);
   const event = {
-    // Millisecond precision: what PostgreSQL returns must hash the same as what was written.
-    occurredAt: new Date(Math.floor(Date.now())),
+    // A JS Date holds whole milliseconds, which PostgreSQL stores exactly, so the hash of the
+    // stored event equals the hash computed here.
+    occurredAt: new Date(),
     type: input.type,
     actorId: input.actor?.id ?? null,
     actorName: input.actor?.name ?? null,
