@@ -23,8 +23,7 @@ export function citePrefixes(prefixes: Prefix[], omitLocants: boolean): CitedPre
     const { substituent } = group[0];
     const locants = group.map((p) => p.locant).sort((a, b) => a - b).map(locantText);
     const [mult, body] = multipliedParts(substituent, group.length);
-    const joiner = /^(sec|tert)-/.test(body) && mult ? '-' : '';
-    const text = (omitLocants ? '' : `${locants.join(',')}-`) + mult + joiner + body;
+    const text = (omitLocants ? '' : `${locants.join(',')}-`) + mult + body;
     return { locants: omitLocants ? [] : locants, text, name: substituent.name };
   });
 }
@@ -33,11 +32,12 @@ export function citePrefixes(prefixes: Prefix[], omitLocants: boolean): CitedPre
  * `count` equal substituents as cited: the multiplying prefix (P-16.9: di, tri for simple prefixes;
  * bis, tris for substituted ones) and the name after it, enclosed where it carries locants or is
  * substituted (P-16.5): ['di', 'methyl'], ['', '(propan-2-yl)'], ['bis', '(2-chloroethyl)'].
+ * An italic sec-/tert- prefix keeps a hyphen after the multiplier: ['di-', 'tert-butyl'].
  */
 export function multipliedParts(substituent: SubstituentName, count: number): [string, string] {
   const wrapped = substituent.enclose ? enclose(substituent.name) : substituent.name;
   if (count === 1) return ['', wrapped];
-  if (!substituent.compound) return [multiplier(count), wrapped];
+  if (!substituent.compound) return [multiplier(count) + (/^(sec|tert)-/.test(wrapped) ? '-' : ''), wrapped];
   return [complexMultiplier(count), substituent.enclose ? wrapped : enclose(wrapped)];
 }
 

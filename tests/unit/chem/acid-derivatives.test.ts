@@ -91,6 +91,18 @@ namesExamples('traditional style: general names', [
   ['NC(=O)CCl', 'chloroacetamide', 'P-66.1.1.1 general name'],
 ], 'traditional');
 
+// A multiplied italic prefix keeps its hyphen: di-tert-butyl, never "ditert-butyl" (P-16.9 with
+// P-29.6, as in 1,4-di-tert-butylbenzene; written from memory). Same rule in the ester word and
+// inside an amino prefix.
+namesExamples('P-16.9 multiplied sec-/tert- prefixes', [
+  ['CC(C)(C)OC(=O)CCC(=O)OC(C)(C)C', 'di-tert-butyl butanedioate', 'P-65.6.3.2.1 with P-29.6 tert-butyl'],
+  ['OCCN(C(C)(C)C)C(C)(C)C', '2-(di-tert-butylamino)ethan-1-ol', 'P-62.2.1.1.2 amino prefix with P-29.6'],
+]);
+
+namesExamples('traditional style: multiplied sec- prefix', [
+  ['CCC(C)OC(=O)CC(=O)OC(C)CC', 'di-sec-butyl propanedioate', 'P-65.6.3.2.1 with P-29.6 sec-butyl'],
+], 'traditional');
+
 refusesExamples('refused whole', [
   ['CC(=O)OCCOC(C)=O', /polyols|multiplicative/],
   ['CCOC(=O)CCC(=O)OC', /O-locants/],
