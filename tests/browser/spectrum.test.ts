@@ -79,15 +79,18 @@ describe('spectrum upload in the browser', () => {
 
     // Wavenumbers run high to low: the cursor near the left edge reads a larger x than near the right.
     const over = plot.locator('.u-over');
-    const box = (await over.boundingBox())!;
     const readout = plot.locator('.u-legend .u-series').first().locator('.u-value');
-    // The legend follows the cursor on a later animation frame, so each reading is polled.
-    const xAt = async (fraction: number) => {
-      await page.mouse.move(box.x + box.width * fraction, box.y + box.height / 2);
-      return expect.poll(async () => Number((await readout.textContent())?.replace(/[^0-9.-]/g, '')));
-    };
-    await (await xAt(0.05)).toBeGreaterThan(1780);
-    await (await xAt(0.95)).toBeLessThan(1720);
+    // The legend follows the cursor on a later animation frame, and the plot may still be settling
+    // into its final place: each poll measures the plot again, moves the cursor, then reads.
+    const xAt = (fraction: number) =>
+      expect.poll(async () => {
+        const box = (await over.boundingBox())!;
+        await page.mouse.move(box.x + box.width * fraction, box.y + box.height / 2);
+        return Number((await readout.textContent())?.replace(/[^0-9.-]/g, ''));
+      });
+    await xAt(0.05).toBeGreaterThan(1780);
+    await xAt(0.95).toBeLessThan(1720);
+    const box = (await over.boundingBox())!;
 
     // Drag to zoom, then back to the whole spectrum.
     const reset = plot.getByRole('button', { name: 'Whole spectrum' });
