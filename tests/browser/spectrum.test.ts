@@ -81,15 +81,18 @@ describe('spectrum upload in the browser', () => {
     const over = plot.locator('.u-over');
     const readout = plot.locator('.u-legend .u-series').first().locator('.u-value');
     // The legend follows the cursor on a later animation frame, and the plot may still be settling
-    // into its final place: each poll measures the plot again, moves the cursor, then reads.
+    // into its final place: each poll brings it on screen, measures it, moves the cursor, then reads.
     const xAt = (fraction: number) =>
       expect.poll(async () => {
+        // Mouse coordinates are the viewport's: the plot must be on screen where it is measured.
+        await over.scrollIntoViewIfNeeded();
         const box = (await over.boundingBox())!;
         await page.mouse.move(box.x + box.width * fraction, box.y + box.height / 2);
         return Number((await readout.textContent())?.replace(/[^0-9.-]/g, ''));
       });
     await xAt(0.05).toBeGreaterThan(1780);
     await xAt(0.95).toBeLessThan(1720);
+    await over.scrollIntoViewIfNeeded();
     const box = (await over.boundingBox())!;
 
     // Drag to zoom, then back to the whole spectrum.
